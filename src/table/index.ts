@@ -3,3 +3,4 @@ export type {
 } from './frame.js';
 export { isCategorical, isNumeric } from './frame.js';
 export { takeDataset, takeRows } from './dataset.js';
+export { dataFingerprint, frameFingerprint, schemaFingerprint } from './fingerprint.js';

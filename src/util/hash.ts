@@ -10,7 +10,7 @@ export class Fnv64 {
   bytes(data: Uint8Array): this {
     let hi = this.hi, lo = this.lo;
     for (let i = 0; i < data.length; i++) {
-      lo ^= data[i];
+      lo = (lo ^ data[i]) >>> 0;
       // multiply (hi,lo) by the FNV prime 0x00000100_000001b3
       const l = lo * 0x1b3;
       const h = hi * 0x1b3 + (lo << 8) + Math.floor(l / 0x100000000);
