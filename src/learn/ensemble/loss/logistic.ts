@@ -1,0 +1,42 @@
+/**
+ * Two-class logistic loss (binomial deviance) on the log-odds F, with y in {0, 1}:
+ * L = log(1 + e^F) − yF, p = 1/(1 + e^−F). Pseudo-residual y − p; leaf value one Newton step
+ * Σ w(y − p) / Σ w p(1 − p); initial model the log-odds of the weighted share of class 1
+ * (Friedman 2001, Algorithm 5 L2_TreeBoost, there written with y in {−1, 1}; ESL Table 10.2).
+ * The figure kept per round is the weighted mean log loss.
+ */
+import { weightedMean, type RatioLoss } from './loss.js';
+
+const EPS = 1e-15;
+
+/** Logistic function 1 / (1 + e^−x). */
+export function sigmoid(x: number): number {
+  return x >= 0 ? 1 / (1 + Math.exp(-x)) : Math.exp(x) / (1 + Math.exp(x));
+}
+
+/**
+ * Create the two-class logistic loss.
+ * @example
+ * logisticLoss().residuals(y, F, 0, out); // out[i] = y[i] − sigmoid(F[i])
+ */
+export function logisticLoss(): RatioLoss {
+  return {
+    name: 'logistic', nOutputs: 1, leafRule: 'ratio', ratioScale: 1,
+    initial(y, w) {
+      const p = Math.min(1 - EPS, Math.max(EPS, weightedMean(y.length, w, (i) => y[i])));
+      return Float64Array.of(Math.log(p / (1 - p)));
+    },
+    value(y, F, w) {
+      // log(1 + e^F) − yF, computed stably
+      return weightedMean(y.length, w, (i) => {
+        const f = F[i];
+        return (f > 0 ? f + Math.log1p(Math.exp(-f)) : Math.log1p(Math.exp(f))) - y[i] * f;
+      });
+    },
+    startRound() {},
+    residuals(y, F, _k, out) { for (let i = 0; i < y.length; i++) out[i] = y[i] - sigmoid(F[i]); },
+    leafTerms(y, F, _k, r, num, den) {
+      for (let i = 0; i < y.length; i++) { const p = y[i] - r[i]; num[i] = r[i]; den[i] = p * (1 - p); }
+    },
+  };
+}

@@ -1,0 +1,53 @@
+/**
+ * Validation of a grow task for the histogram grower: the same rules and messages as the exact grower
+ * (src/learn/tree/grow-exact.ts and grow-context.ts), so both engines reject the same bad input.
+ */
+import { errors } from '../../errors.js';
+import type { GrowTask } from '../grow-task.js';
+
+/** Throw on bad settings, weights or responses; returns the rows with positive weight, ascending. */
+export function checkHistTask(task: GrowTask): Int32Array {
+  const s = task.settings;
+  const nonNeg = (name: string, v: number, int: boolean): void => {
+    if (!(v >= 0) || (int && v !== Infinity && !Number.isInteger(v))) throw errors.badOption(name, v, int ? 'a non-negative integer' : 'a non-negative number');
+  };
+  nonNeg('depthLimit', s.depthLimit, true);
+  nonNeg('leafWeight', s.leafWeight, false);
+  nonNeg('minGain', s.minGain, false);
+  nonNeg('featuresPerSplit', s.featuresPerSplit, true);
+  if (!(s.leafRows >= 1) || !Number.isInteger(s.leafRows)) throw errors.badOption('leafRows', s.leafRows, 'an integer >= 1');
+  if (!(s.leafBudget >= 2) || (s.leafBudget !== Infinity && !Number.isInteger(s.leafBudget))) {
+    throw errors.badOption('leafBudget', s.leafBudget, 'an integer >= 2 or Infinity');
+  }
+  if (s.categorical !== 'multiway' && s.categorical !== 'subset') throw errors.badOption('categorical', s.categorical, "'multiway' or 'subset'");
+  const { frame, weights, response } = task;
+  const n = frame.nRows;
+  if (weights.length !== n) throw errors.badOption('weights', `length ${weights.length}`, `length ${n} (one per row)`);
+  const all = new Int32Array(n);
+  let nPos = 0;
+  for (let i = 0; i < n; i++) {
+    const wi = weights[i];
+    if (!(wi >= 0) || wi === Infinity) throw errors.badValue('weights', i, wi, 'a finite non-negative weight');
+    if (wi > 0) all[nPos++] = i;
+  }
+  if (nPos === 0) throw errors.emptyData('grow a tree (no row has a positive weight)');
+  const base = all.subarray(0, nPos);
+  if (response.kind === 'class') {
+    const k = response.nClasses;
+    if (response.codes.length !== n) throw errors.badOption('response.codes', `length ${response.codes.length}`, `length ${n}`);
+    if (!(k >= 1)) throw errors.badOption('response.nClasses', k, 'at least 1');
+    const codes = response.codes;
+    for (let i = 0; i < nPos; i++) {
+      const r = base[i], c = codes[r];
+      if (!(c >= 0 && c < k)) throw errors.badValue('target', r, c, `a class code in 0..${k - 1}`);
+    }
+  } else {
+    if (response.values.length !== n) throw errors.badOption('response.values', `length ${response.values.length}`, `length ${n}`);
+    const y = response.values;
+    for (let i = 0; i < nPos; i++) {
+      const v = y[base[i]];
+      if (v - v !== 0) throw errors.badValue('target', base[i], v, 'a finite number');
+    }
+  }
+  return base;
+}

@@ -1,0 +1,151 @@
+/**
+ * Bin boundaries for one numeric column.
+ *
+ * A bin is described by its upper bound: bin b holds the values x with upper[b-1] < x <= upper[b], and the
+ * last bound is +Infinity. So "bins 0..b go left" is the same rule as the tree test `x <= upper[b]`, and a
+ * histogram split can be written into a tree as a real threshold.
+ *
+ * - At most `limit` distinct values: one bin per distinct value; bounds are midpoints between neighbouring
+ *   distinct values — the candidate thresholds of the exact (sorting) grower, so both growers agree.
+ * - More distinct values, up to `exactRows` rows: near-equal-count bins from the sorted column (see
+ *   `equalCountCuts`), each bound the midpoint after the last distinct value of its bin.
+ * - More rows: the same cut rule over the items of a KLL quantile sketch (bin-sketch.ts); bounds are the
+ *   sketch's values themselves.
+ */
+import { QuantileSketch } from './bin-sketch.js';
+
+/**
+ * Midpoint of a < b that lies in [a, b) even for huge or adjacent floats. The same formula as the exact
+ * grower's (src/learn/tree/scan-numeric.ts), so both growers write the same thresholds.
+ */
+export function midpoint(a: number, b: number): number {
+  const t = a / 2 + b / 2;
+  return t >= a && t < b ? t : a;
+}
+
+/** Distinct non-NaN values of `values` in ascending order, or null when there are more than `limit`. */
+export function distinctUpTo(values: Float64Array, limit: number): Float64Array | null {
+  const seen = new Set<number>();
+  for (let i = 0; i < values.length; i++) {
+    const x = values[i];
+    if (x !== x || seen.has(x)) continue;
+    seen.add(x === 0 ? 0 : x); // -0 and 0 are one value
+    if (seen.size > limit) return null;
+  }
+  return Float64Array.from(seen).sort();
+}
+
+/**
+ * Greedy equal-count cuts: a bin closes after distinct value j when its weight reaches an equal share of
+ * the weight not yet binned (remaining weight / bins left), so a heavy value does not starve the rest.
+ * Returns the indices j after which a bin closes (at most limit-1 of them).
+ */
+export function equalCountCuts(weights: Float64Array, limit: number): number[] {
+  let total = 0;
+  for (let j = 0; j < weights.length; j++) total += weights[j];
+  const cuts: number[] = [];
+  let acc = 0, target = total / limit;
+  for (let j = 0; j < weights.length - 1 && cuts.length < limit - 1; j++) {
+    acc += weights[j];
+    if (acc >= target) {
+      cuts.push(j);
+      target = acc + (total - acc) / (limit - cuts.length);
+    }
+  }
+  return cuts;
+}
+
+function boundsFromSorted(values: Float64Array, limit: number): Float64Array {
+  // run-length encode the sorted column
+  const vals: number[] = [], counts: number[] = [];
+  for (let i = 0; i < values.length; i++) {
+    const x = values[i];
+    if (vals.length && vals[vals.length - 1] === x) counts[counts.length - 1]++;
+    else { vals.push(x); counts.push(1); }
+  }
+  const cuts = equalCountCuts(Float64Array.from(counts), limit);
+  const upper = new Float64Array(cuts.length + 1);
+  cuts.forEach((j, b) => { upper[b] = midpoint(vals[j], vals[j + 1]); });
+  upper[cuts.length] = Infinity;
+  return upper;
+}
+
+function boundsFromSketch(sketch: QuantileSketch, limit: number): Float64Array {
+  const { values, weights } = sketch.items();
+  const vals: number[] = [], w: number[] = [];
+  for (let i = 0; i < values.length; i++) {
+    if (vals.length && vals[vals.length - 1] === values[i]) w[w.length - 1] += weights[i];
+    else { vals.push(values[i]); w.push(weights[i]); }
+  }
+  const cuts = equalCountCuts(Float64Array.from(w), limit);
+  const upper = new Float64Array(cuts.length + 1);
+  cuts.forEach((j, b) => { upper[b] = vals[j]; });
+  upper[cuts.length] = Infinity;
+  return upper;
+}
+
+/** Upper bounds of one bin per distinct value (midpoints), last = +Infinity. */
+export function boundsFromDistinct(distinct: Float64Array): Float64Array {
+  const n = Math.max(distinct.length, 1);
+  const upper = new Float64Array(n);
+  for (let j = 0; j + 1 < distinct.length; j++) upper[j] = midpoint(distinct[j], distinct[j + 1]);
+  upper[n - 1] = Infinity;
+  return upper;
+}
+
+/** Options of `numericBounds`. */
+export interface BoundsOptions {
+  /** Most bins (not counting the missing bin), 2..255. */
+  readonly limit: number;
+  /** Columns with more rows than this use a quantile sketch instead of a full sort. */
+  readonly exactRows: number;
+  /** Accuracy parameter of the sketch. */
+  readonly sketchK: number;
+}
+
+/** Bins of a numeric column: upper bounds, and the one value of each bin when bins are distinct values. */
+export interface NumericBins {
+  readonly upper: Float64Array;
+  /** The single distinct value of each bin, or null when some bin holds a range of values. */
+  readonly binValues: Float64Array | null;
+}
+
+/**
+ * Bins of a numeric column (NaN = missing, ignored). An all-missing column gets a single bin.
+ * @example
+ * numericBins(Float64Array.of(1, 2, 2, 5), { limit: 255, exactRows: 1e6, sketchK: 800 });
+ * // { upper: [1.5, 3.5, Infinity], binValues: [1, 2, 5] }
+ */
+export function numericBins(values: Float64Array, opts: BoundsOptions): NumericBins {
+  const distinct = distinctUpTo(values, opts.limit);
+  if (distinct) return { upper: boundsFromDistinct(distinct), binValues: distinct.length ? distinct : null };
+  return { upper: numericBounds(values, opts), binValues: null };
+}
+
+/**
+ * Upper bounds of the bins of a numeric column (NaN = missing, ignored); length = number of bins.
+ * @example
+ * numericBounds(Float64Array.of(1, 2, 2, 5), { limit: 255, exactRows: 1e6, sketchK: 800 });
+ * // Float64Array [1.5, 3.5, Infinity]
+ */
+export function numericBounds(values: Float64Array, opts: BoundsOptions): Float64Array {
+  const distinct = distinctUpTo(values, opts.limit);
+  if (distinct) return boundsFromDistinct(distinct);
+  let present = 0;
+  for (let i = 0; i < values.length; i++) if (values[i] === values[i]) present++;
+  if (present <= opts.exactRows) {
+    const sorted = new Float64Array(present);
+    let j = 0;
+    for (let i = 0; i < values.length; i++) if (values[i] === values[i]) sorted[j++] = values[i];
+    return boundsFromSorted(sorted.sort(), opts.limit);
+  }
+  const sketch = new QuantileSketch(opts.sketchK);
+  sketch.updateAll(values);
+  return boundsFromSketch(sketch, opts.limit);
+}
+
+/** Bin bounds from a sketch built elsewhere (streaming reads), with the same cut rule. */
+export function sketchBounds(sketch: QuantileSketch, distinct: Float64Array | null, limit: number): Float64Array {
+  if (distinct && distinct.length <= limit) return boundsFromDistinct(distinct);
+  return boundsFromSketch(sketch, limit);
+}
