@@ -134,4 +134,14 @@ export const errors = {
   badQuery: (source: string, reason: string) =>
     new CoppiceError('bad-query', `DuckDB could not read ${show(source)}: ${reason}.`),
   // --- end speed ---
+  // --- explain: importance, dependence, contributions, scoring, ONNX export (task I) ---
+  /** No values to build a partial dependence grid from. */
+  noGrid: (column: string) =>
+    new CoppiceError('no-grid', `Feature ${show(column)} has no values to build a grid from (all missing?).`),
+  /** A model cannot be written as ONNX-ML tree ensembles. */
+  onnxExport: (reason: string) => new CoppiceError('onnx-export', `Cannot export to ONNX: ${reason}.`),
+  /** An output path that would overwrite an input. */
+  wouldOverwrite: (path: string, what: string) =>
+    new CoppiceError('would-overwrite', `Refusing to write ${show(path)}: it is the ${what}.`),
+  // --- end explain ---
 };

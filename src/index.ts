@@ -2,7 +2,8 @@
  * coppice — the flat public API. Each layer keeps its own list in its `index.ts`;
  * this file only gathers them.
  */
-export * from './errors.js';
+export { CoppiceError, errors } from './errors.js';
+export { show } from './notebook/show.js';
 export * from './util/index.js';
 export * from './table/index.js';
 export * from './learn/index.js';

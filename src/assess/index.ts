@@ -56,3 +56,6 @@ export { searchGrid, searchRandom } from './search-settings.js';
 export type { RandomSearchOptions, SearchOptions, SearchResult, SearchRow, SettingChoice, SettingSummaryRow } from './search-settings.js';
 export { biasVariance } from './bias-variance.js';
 export type { BiasVarianceOptions, BiasVarianceRow, ResampleContext } from './bias-variance.js';
+// Predictions on tables (lead)
+export { predict, predictedLabels } from './predict-table.js';
+export type { TablePredictions } from './predict-table.js';

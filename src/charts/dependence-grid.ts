@@ -66,7 +66,7 @@ export function chartDependenceGrid(input: DependenceGridInput, options: Depende
   }));
   const enc: Record<string, unknown> = {
     color: { field: 'average', type: 'quantitative', title: options.predictionName ?? 'average prediction',
-      scale: { range: [...SEQUENTIAL_RAMP], interpolate: 'lab', zero: false }, legend: { gradientLength: 200, orient: 'right', direction: 'vertical' } },
+      scale: { range: [...SEQUENTIAL_RAMP], interpolate: 'lab', zero: false }, legend: { gradientLength: 200, orient: 'right', direction: 'vertical', titleOrient: 'top' } },
     tooltip: [{ field: 'x', title: input.x.name }, { field: 'y', title: input.y.name }, { field: 'average', format: '.4~g' }],
   };
   const xTitle = withUnit(input.x.name, input.x.unit), yTitle = withUnit(input.y.name, input.y.unit);

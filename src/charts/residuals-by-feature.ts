@@ -80,7 +80,7 @@ export function chartResidualsByFeature(input: ResidualFeatureInput, options: Re
   if (shown.length < present.length) notes.push(`${formatNumber(shown.length)} of ${formatNumber(present.length)} rows drawn (seeded sample)`);
   if (dropped > 0) notes.push(`${formatNumber(dropped)} rows with ${input.featureName} missing not drawn`);
   const [title, subtitle] = titles(options, title0, notes.join(' · '));
-  if (present.length === 0) return chartEmpty(title, `${input.featureName} is missing in every row.`, options);
+  if (present.length === 0) return chartEmpty(title, `No row has a value for ${input.featureName}.`, options);
   const values = Array.from(shown, (j) => ({ value: feature[present[j]], residual: residual[present[j]] }));
   const x = { field: 'value', type: 'quantitative', title: xTitle, scale: { zero: false } };
   const layers: Record<string, unknown>[] = [

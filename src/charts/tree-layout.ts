@@ -3,8 +3,8 @@
  * Software Engineering SE-7(2):223–228: subtrees are laid out bottom-up, each next sibling subtree is
  * pushed right until its left contour clears the right contour of the siblings before it by at least
  * `separation` at every depth, and each parent sits centred over its first and last child. Contours are
- * kept as plain arrays per depth (O(n · height) rather than the paper's threaded O(n); trees drawn here
- * are capped at a few levels).
+ * arrays stored deepest level first with a lazy shift, so moving a subtree is O(1) and merging two
+ * contours costs the height of the shorter one (the same bound the paper gets with threads).
  */
 
 /** x (in units of `separation`) and depth of every node; nodes not reached from the root get NaN. */
@@ -15,7 +15,26 @@ export interface TreeLayout {
   readonly width: number;
 }
 
-interface Contour { left: number[]; right: number[] }
+/** Left and right contours of a subtree, deepest level first; true x = value + shift. */
+interface Contour { left: number[]; leftShift: number; right: number[]; rightShift: number }
+
+const at = (arr: number[], shift: number, d: number): number => arr[arr.length - 1 - d] + shift;
+
+/** Merge `next` (already moved by `off`) to the right of `acc`; reuses the longer arrays. */
+function mergeContours(acc: Contour, next: Contour, off: number): Contour {
+  const hAcc = acc.left.length, hNext = next.left.length;
+  const nextLeftShift = next.leftShift + off, nextRightShift = next.rightShift + off;
+  if (hNext >= hAcc) {
+    // Right side: all of next. Left side: acc on top, next below.
+    const left = next.left;
+    for (let d = 0; d < hAcc; d++) left[left.length - 1 - d] = at(acc.left, acc.leftShift, d) - nextLeftShift;
+    return { left, leftShift: nextLeftShift, right: next.right, rightShift: nextRightShift };
+  }
+  // Left side: all of acc. Right side: next on top, acc below.
+  const right = acc.right;
+  for (let d = 0; d < hNext; d++) right[right.length - 1 - d] = at(next.right, nextRightShift, d) - acc.rightShift;
+  return { left: acc.left, leftShift: acc.leftShift, right, rightShift: acc.rightShift };
+}
 
 /**
  * Lay out a tree given each node's children (node ids; `children[n]` empty for a leaf).
@@ -43,27 +62,26 @@ export function layoutTidyTree(children: readonly (readonly number[])[], root = 
   for (let k = order.length - 1; k >= 0; k--) {
     const v = order[k];
     const kids = children[v];
-    if (kids.length === 0) { contour[v] = { left: [0], right: [0] }; continue; }
-    const offsets: number[] = [];
-    const accLeft: number[] = [], accRight: number[] = [];
-    kids.forEach((c, i) => {
-      const cc = contour[c]!;
-      let off = 0;
-      if (i > 0) {
-        off = -Infinity;
-        const common = Math.min(accRight.length, cc.left.length);
-        for (let d = 0; d < common; d++) off = Math.max(off, accRight[d] - cc.left[d] + separation);
-      }
+    if (kids.length === 0) { contour[v] = { left: [0], leftShift: 0, right: [0], rightShift: 0 }; continue; }
+    const offsets: number[] = [0];
+    let acc = contour[kids[0]]!;
+    contour[kids[0]] = undefined;
+    for (let i = 1; i < kids.length; i++) {
+      const cc = contour[kids[i]]!;
+      contour[kids[i]] = undefined;
+      let off = -Infinity;
+      const common = Math.min(acc.right.length, cc.left.length);
+      for (let d = 0; d < common; d++) off = Math.max(off, at(acc.right, acc.rightShift, d) - at(cc.left, cc.leftShift, d) + separation);
       offsets.push(off);
-      for (let d = 0; d < cc.left.length; d++) {
-        if (d >= accLeft.length) accLeft.push(cc.left[d] + off);
-        if (d < accRight.length) accRight[d] = cc.right[d] + off; else accRight.push(cc.right[d] + off);
-      }
-      contour[c] = undefined;
-    });
+      acc = mergeContours(acc, cc, off);
+    }
     const mid = (offsets[0] + offsets[offsets.length - 1]) / 2;
     kids.forEach((c, i) => { rel[c] = offsets[i] - mid; });
-    contour[v] = { left: [0, ...accLeft.map((x) => x - mid)], right: [0, ...accRight.map((x) => x - mid)] };
+    acc.leftShift -= mid;
+    acc.rightShift -= mid;
+    acc.left.push(-acc.leftShift);
+    acc.right.push(-acc.rightShift);
+    contour[v] = acc;
   }
   const x = new Float64Array(n).fill(NaN);
   x[root] = 0;

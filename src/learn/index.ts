@@ -30,3 +30,34 @@ export type { ComplexityRow, CostComplexityOptions, CostComplexityResult } from 
 export { childrenOf, collapseTree, leafCount } from './prune/collapse.js';
 export { nodeLosses } from './prune/node-losses.js';
 export type { NodeLosses } from './prune/node-losses.js';
+// --- ensembles (task G) ---
+export { drawBootstrapCounts } from './ensemble/bootstrap.js';
+export { drawWeightedCounts } from './ensemble/weighted-draw.js';
+export { drawSubsampleMask } from './ensemble/subsample.js';
+export { fitBagging } from './ensemble/bagging.js';
+export type { BaggingOptions } from './ensemble/bagging.js';
+export { bagLearner } from './ensemble/bag-learner.js';
+export type { BagLearnerOptions, BaggedLearner, Learner } from './ensemble/bag-learner.js';
+export { fitForest, defaultFeaturesPerSplit } from './ensemble/forest.js';
+export type { ForestOptions } from './ensemble/forest.js';
+export { growForestMember } from './ensemble/forest-member.js';
+export type { GrownMember, MemberData, MemberPlan } from './ensemble/forest-member.js';
+export { fitAdaBoost } from './ensemble/adaboost.js';
+export type { AdaBoostOptions } from './ensemble/adaboost.js';
+export { sammeStepWeight, updateRowWeights, weightedError, isNoBetterThanGuessing } from './ensemble/adaboost-weights.js';
+export { fitBoosting } from './ensemble/boosting.js';
+export type { BoostingOptions } from './ensemble/boosting-options.js';
+export { pickLoss, defaultLossName, lossNames } from './ensemble/loss/pick.js';
+export type { Loss, LossName, RatioLoss, GroupLoss } from './ensemble/loss/loss.js';
+export { fitStack } from './ensemble/stacking.js';
+export type { StackLearner, StackOptions } from './ensemble/stacking.js';
+export { predictForest } from './ensemble/predict-forest.js';
+export { predictAdaBoost } from './ensemble/predict-adaboost.js';
+export { predictBoosting, boostingScores } from './ensemble/predict-boosting.js';
+export { predictStack } from './ensemble/predict-stack.js';
+export { impurityImportance } from './ensemble/importance.js';
+export type { ImpurityImportanceRow } from './ensemble/importance.js';
+export type { OobPoint } from './ensemble/oob.js';
+export type { AdaBoostModel, AdaBoostRound, BoostingModel, EnsembleModel, ForestModel, StackModel } from './ensemble/models.js';
+export { defaultEnsembleEngine } from './ensemble/engine.js';
+// --- end ensembles ---

@@ -26,3 +26,14 @@ export type { CheckResult, CheckSpec, CustomCheck, DecisionRecord, EvidenceItem,
 export { noteMetric, noteTable, notePredictions, noteShown, noteAffectsPeople } from './record-notes.js';
 export { currentRunState, resetRunState, setExtractOverrides, type BoundExtract, type NotedMetric, type RunState } from './record-state.js';
 export { profileColumn, shareAtOrBelow, quantileOf, type ColumnProfile, type NumericProfile, type CategoricalProfile } from './record-profile.js';
+// --- reruns: headless runs, run records, comparison, report (task H) ---
+export { runNotebook, type RunOptions, type RunOutcome } from './runner.js';
+export { readRunRecord, validateRunRecord, locateRunRecord, RUN_FORMAT, RUN_VERSION, type RunRecord, type CellTiming, type RunFailure, type ModelNote } from './record-file.js';
+export { compareRuns, runExitCode, type RunComparison, type ColumnDriftRow, type ExtractComparison, type MetricDelta, type PredictionShift, type CheckChange } from './compare-runs.js';
+export { comparisonText } from './compare-text.js';
+export { diffSchemas, describeSchemaChange, type SchemaChange } from './compare-schema.js';
+export { psiFromShares, driftBand, numericDrift, categoricalDrift, columnDrift, quantileEdges, PSI_FLOOR, type DriftBand, type DriftBin, type DriftResult } from './drift-psi.js';
+export { renderReport, type ReportInput } from './report-html.js';
+export { renderMarkdown } from './report-markdown.js';
+export { escapeHtml } from './report-escape.js';
+export { writeAtomic, writeJsonAtomic } from './atomic-write.js';

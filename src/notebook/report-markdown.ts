@@ -42,9 +42,13 @@ function linksAndEmphasis(text: string): string {
  * renderInline('**late** parcels: `km > 40`'); // '<strong>late</strong> parcels: <code>km &gt; 40</code>'
  */
 export function renderInline(text: string): string {
-  return text.split(/(`[^`\n]+`)/g).map((part) => (/^`[^`]+`$/.test(part)
-    ? `<code>${escapeHtml(part.slice(1, -1))}</code>`
-    : linksAndEmphasis(part))).join('');
+  // Code spans are set aside first (their text is literal), then links and emphasis apply around them.
+  const spans: string[] = [];
+  const held = text.replace(/\u0000/g, '').replace(/`([^`\n]+)`/g, (_, code: string) => {
+    spans.push(`<code>${escapeHtml(code)}</code>`);
+    return `\u0000${spans.length - 1}\u0000`;
+  });
+  return linksAndEmphasis(held).replace(/\u0000(\d+)\u0000/g, (_, i: string) => spans[Number(i)]);
 }
 
 function tableRow(line: string): string[] {

@@ -19,6 +19,7 @@ pre { background: var(--panel); padding: 8px 10px; border-radius: 4px; overflow-
 pre.stderr { background: #fbf3e3; }
 table.data, .markdown table, .html-output table { border-collapse: collapse; margin: 6px 0 12px; font-size: 13px; }
 table.data th, table.data td, .markdown th, .markdown td { border-bottom: 1px solid var(--line); padding: 3px 10px 3px 0; text-align: left; vertical-align: top; }
+.html-output th, .html-output td { padding: 2px 10px 2px 0; border-bottom: 1px solid var(--line); vertical-align: top; }
 .cell { margin: 10px 0 18px; }
 .cell summary { cursor: pointer; color: var(--muted); font-size: 13px; }
 .cell summary code { color: var(--muted); }

@@ -7,6 +7,24 @@ import { daysFromCivil, daysInMonth } from './civil-days.js';
 
 const ISO = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?\s*(Z|z|[+-]\d{2}(?::?\d{2})?)?)?$/;
 
+function digits(s: string, from: number, count: number): number {
+  let v = 0;
+  for (let i = from; i < from + count; i++) {
+    const c = s.charCodeAt(i) - 48;
+    if (c < 0 || c > 9) return NaN;
+    v = v * 10 + c;
+  }
+  return v;
+}
+
+/** Fast path for `YYYY-MM-DD` (the common case), without a regular expression. */
+function plainDate(s: string): number {
+  if (s.charCodeAt(7) !== 45) return NaN;
+  const year = digits(s, 0, 4), month = digits(s, 5, 2), day = digits(s, 8, 2);
+  if (!(month >= 1 && month <= 12 && day >= 1 && day <= daysInMonth(year, month))) return NaN;
+  return daysFromCivil(year, month, day) * 86_400_000;
+}
+
 /**
  * Milliseconds since 1970-01-01T00:00Z for an ISO date or date-time text, or NaN when the text is not one
  * (including impossible dates such as 2023-02-30).
@@ -20,6 +38,7 @@ export function parseIsoDate(text: string): number {
   const padded = text.charCodeAt(0) <= 32 || text.charCodeAt(n - 1) <= 32;
   const s = padded ? text.trim() : text;
   if (s.charCodeAt(4) !== 45) return NaN; // quick refusal: no '-' after the year
+  if (s.length === 10) return plainDate(s);
   const m = ISO.exec(s);
   if (!m) return NaN;
   const year = +m[1], month = +m[2], day = +m[3];

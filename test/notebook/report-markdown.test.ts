@@ -23,6 +23,9 @@ describe('renderMarkdown(source)', () => {
     expect(renderInline('[here](#run-details)')).toBe('<a href="#run-details">here</a>');
     expect(renderInline('[a](x" onmouseover="y)')).not.toMatch(/onmouseover="/);
   });
+  it('applies emphasis around code spans and leaves text inside them literal', () => {
+    expect(renderInline('**`waste_pct`** and `**not bold**`')).toBe('<strong><code>waste_pct</code></strong> and <code>**not bold**</code>');
+  });
   it('keeps snake_case words intact and handles empty input', () => {
     expect(renderInline('hours_since_harvest and truck_temp_c')).toBe('hours_since_harvest and truck_temp_c');
     expect(renderMarkdown('')).toBe('');

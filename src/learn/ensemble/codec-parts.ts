@@ -7,7 +7,7 @@ import type { FlatTree } from '../flat-tree.js';
 import type { ModelHeader } from '../model.js';
 import { decodeFlatTree, encodeFlatTree } from '../tree/flat-tree-json.js';
 import { decodeNumber, encodeNumber, readArray, readObject, readString, type JsonValue } from '../tree/json-values.js';
-import type { ImportanceRow } from './importance.js';
+import type { ImpurityImportanceRow } from './importance.js';
 
 /** Outputs each tree of a model must have: K for class-probability trees, 1 for value trees. */
 export function classOutputs(header: ModelHeader): number {
@@ -27,14 +27,14 @@ export function decodeTrees(v: unknown, path: string, features: readonly ColumnS
   });
 }
 
-export function encodeImportance(rows: readonly ImportanceRow[]): JsonValue[] {
-  return rows.map((r) => ({ feature: r.feature, importance: encodeNumber(r.importance) }));
+export function encodeImportance(rows: readonly ImpurityImportanceRow[]): JsonValue[] {
+  return rows.map((r) => ({ feature: r.feature, value: encodeNumber(r.value) }));
 }
 
-export function decodeImportance(v: unknown, path: string): ImportanceRow[] {
+export function decodeImportance(v: unknown, path: string): ImpurityImportanceRow[] {
   return readArray(v, path).map((x, i) => {
     const o = readObject(x, `${path}[${i}]`);
-    return { feature: readString(o.feature, `${path}[${i}].feature`), importance: decodeNumber(o.importance, `${path}[${i}].importance`) };
+    return { feature: readString(o.feature, `${path}[${i}].feature`), value: decodeNumber(o.value, `${path}[${i}].value`) };
   });
 }
 

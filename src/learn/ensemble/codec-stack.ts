@@ -11,7 +11,7 @@ import type { LogisticCombiner } from './logistic-combiner.js';
 import type { StackModel } from './models.js';
 import type { RidgeCombiner } from './ridge-combiner.js';
 
-type ToJson = (m: ModelHeader) => { [key: string]: JsonValue };
+type ToJson = (m: ModelHeader, options: { created?: string }) => { [key: string]: JsonValue };
 type FromJson = (j: unknown) => ModelHeader;
 
 function encodeCombiner(c: LogisticCombiner | RidgeCombiner): { [key: string]: JsonValue } {
@@ -45,7 +45,8 @@ export function makeStackCodec(toJson: ToJson, fromJson: FromJson) {
   return {
     encode(model: StackModel): { [key: string]: JsonValue } {
       return {
-        members: model.members.map((m) => ({ name: m.name, model: toJson(m.model) })),
+        // a member's own time stamp when it has one; else a fixed marker, so the same stack writes the same JSON
+        members: model.members.map((m) => ({ name: m.name, model: toJson(m.model, { created: (m.model as { created?: string }).created ?? 'with the stack' }) })),
         combiner: encodeCombiner(model.combiner),
         passThrough: [...model.passThrough],
         folds: model.folds,

@@ -41,7 +41,7 @@ export function defaultFeaturesPerSplit(p: number, target: 'class' | 'number'): 
  * @example
  * const forest = fitForest(data, { size: 200, seed: 7 });
  * forest.oobCurve.at(-1); // { size: 200, error: 0.04 }
- * forest.importance[0];   // { feature: 'tenure', importance: 0.31 }
+ * forest.importance[0];   // { feature: 'tenure', value: 0.31 }
  */
 export function fitForest(data: Dataset, options: ForestOptions = {}): ForestModel {
   checkKnown(options, forestKeys);

@@ -4,7 +4,7 @@
  */
 import type { FlatTree } from '../flat-tree.js';
 import type { ModelHeader } from '../model.js';
-import type { ImportanceRow } from './importance.js';
+import type { ImpurityImportanceRow } from './importance.js';
 import type { LossName } from './loss/loss.js';
 import type { OobPoint } from './oob.js';
 import type { LogisticCombiner } from './logistic-combiner.js';
@@ -19,7 +19,7 @@ export interface ForestModel extends ModelHeader {
   readonly combine: 'average' | 'vote';
   /** Out-of-bag error after each member. */
   readonly oobCurve: readonly OobPoint[];
-  readonly importance: readonly ImportanceRow[];
+  readonly importance: readonly ImpurityImportanceRow[];
 }
 
 /** One AdaBoost round. */
@@ -46,7 +46,7 @@ export interface AdaBoostModel extends ModelHeader {
   readonly stopReason: 'rounds' | 'perfect' | 'guessing';
   /** Weighted class shares: the prediction when no round was kept. */
   readonly prior: readonly number[];
-  readonly importance: readonly ImportanceRow[];
+  readonly importance: readonly ImpurityImportanceRow[];
 }
 
 export interface BoostingModel extends ModelHeader {
@@ -68,7 +68,7 @@ export interface BoostingModel extends ModelHeader {
   readonly bestRound: number;
   /** Rounds kept in `trees` (early stopping truncates to `bestRound`). */
   readonly roundsKept: number;
-  readonly importance: readonly ImportanceRow[];
+  readonly importance: readonly ImpurityImportanceRow[];
 }
 
 /** A base learner of a stack, fitted on every row. */

@@ -77,6 +77,14 @@ function scanValue(ctx: GrowContext, vals: Float64Array, seg: Int32Array, start:
   }
 }
 
+/**
+ * Class responses. Cuts inside a run of rows of one class are skipped: weighted entropy and Gini are
+ * concave in the weight moved across the cut, so along such a run the best cut is at one of its ends
+ * (Fayyad & Irani 1992, "On the handling of continuous-valued attributes in decision tree generation",
+ * Machine Learning 8:87–102). A cut is skipped only when the value blocks on both sides hold one and
+ * the same class and the cuts before and after it are both allowed by the leaf minimums, so the first
+ * best cut is still found.
+ */
 function scanClass(ctx: GrowContext, vals: Float64Array, seg: Int32Array, start: number, kEnd: number,
   total: Float64Array, tol: number, best: ScanBest): void {
   const w = ctx.w, cls = ctx.classes as Int32Array, nCh = ctx.nCh, m = ctx.measure;
@@ -85,26 +93,37 @@ function scanClass(ctx: GrowContext, vals: Float64Array, seg: Int32Array, start:
   const parent = weightedImpurity(m, total, 0, nCh);
   const nKnown = kEnd - start;
   const left = new Float64Array(nCh);
-  let wl = 0;
+  let wl = 0, prevAllowed = false, blockClass = -1, blockPure = false;
   for (let i = start; i < kEnd - 1; i++) {
-    const r = seg[i];
-    left[cls[r]] += w[r]; wl += w[r];
-    const a = vals[r], b = vals[seg[i + 1]];
+    const r = seg[i], k = cls[r], a = vals[r];
+    if (i === start || vals[seg[i - 1]] !== a) { blockClass = k; blockPure = true; } else if (k !== blockClass) blockPure = false;
+    left[k] += w[r]; wl += w[r];
+    const b = vals[seg[i + 1]];
     if (a === b) continue;
     const nLeft = i - start + 1;
-    if (nLeft < leafRows || nKnown - nLeft < leafRows) continue;
     const wr = W - wl;
-    if (wl < leafWeight || wr < leafWeight) continue;
+    if (nLeft < leafRows || nKnown - nLeft < leafRows || wl < leafWeight || wr < leafWeight) { prevAllowed = false; continue; }
+    if (prevAllowed && blockPure && cls[seg[i + 1]] === blockClass) {
+      let j = i + 1, bw = 0, pure = true;
+      while (j < kEnd && vals[seg[j]] === b) {
+        const q = seg[j];
+        if (cls[q] !== blockClass) { pure = false; break; }
+        bw += w[q]; j++;
+      }
+      // the next cut (after the next block) must exist and be allowed; left minimums only get easier
+      if (pure && j < kEnd && nKnown - (j - start) >= leafRows && wr - bw >= leafWeight) continue;
+    }
+    prevAllowed = true;
     let score: number;
     if (m === GINI) {
       let ql = 0, qr = 0;
-      for (let k = 0; k < nCh; k++) { const l = left[k], rr = total[k] - l; ql += l * l; qr += rr * rr; }
+      for (let c = 0; c < nCh; c++) { const l = left[c], rr = total[c] - l; ql += l * l; qr += rr * rr; }
       // W·gini = W - Σc²/W for each side
       score = parent - (wl - ql / wl) - (wr - qr / wr);
     } else {
       let el = 0, er = 0;
-      for (let k = 0; k < nCh; k++) {
-        const l = left[k], rr = total[k] - l;
+      for (let c = 0; c < nCh; c++) {
+        const l = left[c], rr = total[c] - l;
         if (l > 0) el += l * Math.log2(l);
         if (rr > 0) er += rr * Math.log2(rr);
       }

@@ -74,7 +74,7 @@ describe('fitBoosting(data, options) on reference data', () => {
     const train = friedman1(2000, 101), test = friedman1(10000, 202);
     const m = fitBoosting(train, { rounds: 150, depthLimit: 3, learningRate: 0.2 });
     const e = mse(predictBoosting(m, test.features).value, valuesOf(test));
-    const noise = m.importance.filter((r) => ['x6', 'x7', 'x8', 'x9', 'x10'].includes(r.feature)).reduce((a, r) => a + r.importance, 0);
+    const noise = m.importance.filter((r) => ['x6', 'x7', 'x8', 'x9', 'x10'].includes(r.feature)).reduce((a, r) => a + r.value, 0);
     console.info(`[boosting] friedman1 test MSE = ${e.toFixed(4)}; importance of x6..x10 = ${noise.toFixed(4)}`);
     expect(e).toBeGreaterThan(1.0 - 0.1); // the floor (sampling error of 10,000 noise draws: sd ≈ 0.014)
     expect(e).toBeLessThan(2.0);

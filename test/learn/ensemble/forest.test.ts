@@ -45,14 +45,14 @@ describe('fitForest(data, options)', () => {
     // irrelevant inputs x6..x10 (Friedman 1991 design) rank below the strong inputs x1, x2, x4. Fully grown
     // trees still split noise near the leaves, so noise gets some gain: each noise input stays under 0.1
     // (bound: common practice, measured ≈ 0.05–0.08 here).
-    const imp = new Map(model.importance.map((r) => [r.feature, r.importance]));
+    const imp = new Map(model.importance.map((r) => [r.feature, r.value]));
     const noise = ['x6', 'x7', 'x8', 'x9', 'x10'].map((f) => imp.get(f) ?? 0);
-    console.info(`[forest] friedman1 importance ${model.importance.map((r) => `${r.feature}=${r.importance.toFixed(3)}`).join(' ')}`);
+    console.info(`[forest] friedman1 importance ${model.importance.map((r) => `${r.feature}=${r.value.toFixed(3)}`).join(' ')}`);
     for (const v of noise) {
       expect(v).toBeLessThan(0.1);
       for (const f of ['x1', 'x2', 'x4']) expect(v).toBeLessThan(imp.get(f) ?? 0);
     }
-    expect(model.importance.reduce((a, r) => a + r.importance, 0)).toBeCloseTo(1, 12);
+    expect(model.importance.reduce((a, r) => a + r.value, 0)).toBeCloseTo(1, 12);
   });
 
   it('is deterministic under a seed (same model JSON twice) and trees depend only on (seed, t)', () => {

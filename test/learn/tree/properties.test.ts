@@ -99,3 +99,26 @@ describe('predictFrame(model, frame) checks the frame', () => {
     }
   });
 });
+
+describe('predictFrame(model, frame) with categories unseen in training', () => {
+  const penguins = penguinsData();
+  for (const categorical of ['multiway', 'subset'] as const) {
+    it(`routes a category appended to the dictionary like a missing value (${categorical})`, () => {
+      const model = fitTree(penguins, { categorical });
+      const island = penguins.features.columns[0];
+      if (island.kind !== 'categorical') throw new Error('categorical');
+      const withNew = { ...island, categories: [...island.categories, 'Zzz'], codes: island.codes.map(() => island.categories.length) };
+      const asMissing = { ...island, codes: island.codes.map(() => -1) };
+      const f = (col: typeof island) => ({ ...penguins.features, columns: [col, ...penguins.features.columns.slice(1)] });
+      const a = predictFrame(model, f(withNew)), b = predictFrame(model, f(asMissing));
+      expect(Array.from(a.proba)).toEqual(Array.from(b.proba));
+    });
+  }
+  it('rejects a reordered dictionary', () => {
+    const model = fitTree(penguins);
+    const island = penguins.features.columns[0];
+    if (island.kind !== 'categorical') throw new Error('categorical');
+    const frame = { ...penguins.features, columns: [{ ...island, categories: [...island.categories].reverse() }, ...penguins.features.columns.slice(1)] };
+    expect(() => predictFrame(model, frame)).toThrow(/different category dictionary/);
+  });
+});
