@@ -16,6 +16,12 @@ function signed(x: number | null): string {
   return `${x > 0 ? '+' : x < 0 ? '−' : '±'}${num(Math.abs(x))}`;
 }
 
+/** A column mean for display: dates (kept as epoch days) as ISO dates, other numbers as numbers. */
+export function meanText(x: number | null, kind: string): string {
+  if (x === null || kind !== 'date' || !Number.isFinite(x)) return num(x);
+  return new Date(Math.round(x * 86_400_000)).toISOString().slice(0, 10);
+}
+
 /** Why the exit code is what it is, in words. */
 export function exitCodeReason(code: 0 | 1 | 2): string {
   return code === 0 ? 'every decision check holds' : code === 1 ? 'a decision check fails' : 'the run failed';
@@ -43,7 +49,7 @@ export function comparisonText(c: RunComparison, options: { stableLimit?: number
     out.push('  Drift by population stability index (bands 0.1 / 0.25, common practice):');
     const width = Math.max(8, ...e.drift.map((d) => d.column.length));
     for (const d of [...moving, ...stable.slice(0, options.stableLimit ?? 0)]) {
-      const mean = d.baselineMean !== null && d.currentMean !== null ? `   mean ${num(d.baselineMean)} → ${num(d.currentMean)}` : '';
+      const mean = d.baselineMean !== null && d.currentMean !== null ? `   mean ${meanText(d.baselineMean, d.kind)} → ${meanText(d.currentMean, d.kind)}` : '';
       const note = d.flagged ? '' : d.band === 'stable' ? '' : '  (date column: expected to move)';
       out.push(`    ${d.flagged ? '!' : ' '} ${d.column.padEnd(width)}  PSI ${num(d.psi).padStart(6)}  ${d.band}${mean}${note}`);
     }

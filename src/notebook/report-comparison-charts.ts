@@ -15,8 +15,9 @@ import type { ComparisonChart } from './report-comparison.js';
 export function comparisonCharts(c: RunComparison): ComparisonChart[] {
   const out: ComparisonChart[] = [];
   for (const e of c.extracts) {
-    const rows = e.drift.filter((d) => Number.isFinite(d.psi)).map((d) => ({ feature: d.kind === 'date' ? `${d.column} (date)` : d.column, psi: d.psi }));
-    if (rows.length) out.push({ title: `Drift in ${e.name}`, spec: chartDrift(rows, { title: `Drift by column: ${e.name}` }) });
+    // Date columns are expected to move between extracts and would dwarf the rest; they stay in the table.
+    const rows = e.drift.filter((d) => d.kind !== 'date' && Number.isFinite(d.psi)).map((d) => ({ feature: d.column, psi: d.psi }));
+    if (rows.length) out.push({ title: `Drift in ${e.name}`, spec: chartDrift(rows, { title: `Drift by column: ${e.name} (date columns left out)` }) });
   }
   const metrics = c.metrics
     .filter((m) => m.baseline !== null && m.current !== null && Number.isFinite(m.baseline) && Number.isFinite(m.current) && m.higherIsBetter !== null)

@@ -4,7 +4,7 @@
  */
 import { describeSchemaChange } from './compare-schema.js';
 import type { RunComparison } from './compare-runs.js';
-import { exitCodeReason } from './compare-text.js';
+import { exitCodeReason, meanText } from './compare-text.js';
 import { escapeHtml } from './report-escape.js';
 import type { ChartCollector } from './report-outputs.js';
 
@@ -57,7 +57,7 @@ export function renderComparison(c: RunComparison, charts: ChartCollector, extra
       out.push(table(['column', 'kind', 'PSI', 'band', 'mean before', 'mean now'], e.drift.map((d) => [
         escapeHtml(d.column), escapeHtml(d.kind), num(d.psi),
         badge(d.band === 'stable' ? 'ok' : d.band === 'moderate' ? 'warn' : 'bad', d.flagged || d.band === 'stable' ? d.band : `${d.band} (date)`),
-        num(d.baselineMean), num(d.currentMean),
+        meanText(d.baselineMean, d.kind), meanText(d.currentMean, d.kind),
       ])));
     }
   }

@@ -42,6 +42,15 @@ export function binnedFrameFor(frame: Frame, options: BinCacheOptions = {}): Bin
   return binned;
 }
 
+/**
+ * The cached binned form of `frame` for these options, or null (never computes).
+ * @example
+ * cachedBinnedFrame(frame) ?? binFrame(frame);
+ */
+export function cachedBinnedFrame(frame: Frame, options: BinOptions = {}): BinnedFrame | null {
+  return byFrame.get(frame)?.get(optionsKey(options)) ?? null;
+}
+
 /** Store a binned frame built elsewhere (e.g. by a streaming reader) as the binned form of `frame`. */
 export function rememberBinnedFrame(frame: Frame, binned: BinnedFrame, options: BinOptions = {}): void {
   if (binned.nRows !== frame.nRows || binned.features.length !== frame.columns.length) {

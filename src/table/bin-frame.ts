@@ -10,7 +10,7 @@
  */
 import { errors } from '../errors.js';
 import { numericBins } from './bin-edges.js';
-import type { CategoricalColumn, Frame } from './frame.js';
+import type { CategoricalColumn, Column, Frame } from './frame.js';
 
 export const MISSING_BIN = 255;
 
@@ -95,6 +95,27 @@ export function categoryBins(col: CategoricalColumn, limit: number): { binOfCode
 }
 
 /**
+ * Bin one column, writing its codes into `out` (length = rows); returns the column's bin description.
+ * @example
+ * const out = new Uint8Array(frame.nRows);
+ * const feature = binColumn(frame.columns[0], resolveBinOptions(), out);
+ */
+export function binColumn(col: Column, opts: ResolvedBinOptions, out: Uint8Array): BinnedFeature {
+  const n = out.length;
+  if (col.kind === 'categorical') {
+    const { binOfCode, nBins } = categoryBins(col, opts.binLimit);
+    for (let i = 0; i < n; i++) {
+      const c = col.codes[i];
+      out[i] = c >= 0 && c < binOfCode.length ? binOfCode[c] : MISSING_BIN;
+    }
+    return { name: col.name, kind: 'categorical', nBins, upper: new Float64Array(0), binValues: null, binOfCode };
+  }
+  const { upper, binValues } = numericBins(col.values, { limit: opts.binLimit, exactRows: opts.exactRows, sketchK: opts.sketchK });
+  codeNumeric(col.values, upper, out);
+  return { name: col.name, kind: 'numeric', nBins: upper.length, upper, binValues, binOfCode: null };
+}
+
+/**
  * Bin every feature of a frame (see the layout above). Prefer `binnedFrameFor`, which caches the result.
  * @example
  * const binned = binFrame(frame, { binLimit: 63 });
@@ -104,19 +125,6 @@ export function binFrame(frame: Frame, options: BinOptions = {}): BinnedFrame {
   const opts = resolveBinOptions(options);
   const n = frame.nRows;
   const codes = new Uint8Array(n * frame.columns.length);
-  const features: BinnedFeature[] = frame.columns.map((col, f) => {
-    const out = codes.subarray(f * n, (f + 1) * n);
-    if (col.kind === 'categorical') {
-      const { binOfCode, nBins } = categoryBins(col, opts.binLimit);
-      for (let i = 0; i < n; i++) {
-        const c = col.codes[i];
-        out[i] = c >= 0 && c < binOfCode.length ? binOfCode[c] : MISSING_BIN;
-      }
-      return { name: col.name, kind: 'categorical', nBins, upper: new Float64Array(0), binValues: null, binOfCode };
-    }
-    const { upper, binValues } = numericBins(col.values, { limit: opts.binLimit, exactRows: opts.exactRows, sketchK: opts.sketchK });
-    codeNumeric(col.values, upper, out);
-    return { name: col.name, kind: 'numeric', nBins: upper.length, upper, binValues, binOfCode: null };
-  });
+  const features = frame.columns.map((col, f) => binColumn(col, opts, codes.subarray(f * n, (f + 1) * n)));
   return { nRows: n, features, codes };
 }

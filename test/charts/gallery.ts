@@ -136,7 +136,7 @@ export function gallery(): Record<string, ChartSpec> {
   out['validation-curve'] = charts.chartValidationCurve(vc, { setting: 'depth limit', scoreName: 'accuracy (share correct)', chosen: 6 });
   const vcLog: charts.ValidationCurveRow[] = [];
   for (const lr of [0.003, 0.01, 0.03, 0.1, 0.3, 1]) for (let f = 1; f <= 4; f++) vcLog.push({ value: lr, fold: f, score: 0.45 + 0.1 * Math.log10(lr / 0.05) ** 2 / 3 + rng.normal() * 0.01 });
-  out['validation-curve-log'] = charts.chartValidationCurve(vcLog, { setting: 'learning rate', scoreName: 'log loss (nats)', chosen: 0.03 });
+  out['validation-curve-log'] = charts.chartValidationCurve(vcLog, { setting: 'learning rate', scoreName: 'log loss (nats)', chosen: 0.1 });
   const pp: charts.PruningPathRow[] = [1, 2, 3, 5, 7, 9, 12, 16, 21, 27, 34].map((leaves) => ({
     leaves, heldOutError: 0.42 * Math.exp(-leaves / 4) + 0.16 + 0.0025 * leaves, trainingError: 0.42 * Math.exp(-leaves / 4) + 0.14 - 0.0022 * leaves,
   }));

@@ -49,6 +49,7 @@ describe('compareRuns(baseline, current)', () => {
     expect(text).toContain('column depot has new categories "e"');
     expect(text).toContain('[FAILS] rmse <= 2.5');
     expect(text).toContain('Exit code 1: a decision check fails.');
+    expect(text).toMatch(/when +PSI .* mean 2025-01-1\d → 2025-03-1\d +\(date column: expected to move\)/);
   });
 
   it('finds no drift and exit code 0 for a run compared with itself', () => {

@@ -16,7 +16,6 @@
  */
 import { engine } from '../../kernels/engine.js';
 import { BINS, MISSING } from '../../kernels/layout.js';
-import { binnedFrameFor } from '../../table/bin-cache.js';
 import { NUMERIC, SUBSET } from '../flat-tree.js';
 import type { GrowResult, GrowTask } from '../grow-task.js';
 import { ENTROPY, GINI, VARIANCE, weightedImpurity, type ImpurityCode } from '../tree/impurity.js';
@@ -24,7 +23,7 @@ import { MaxHeap } from '../tree/max-heap.js';
 import { weightedMedian } from '../tree/node-value.js';
 import { sampleFeatures } from '../tree/sample-features.js';
 import { midpoint } from '../../table/bin-edges.js';
-import { histBuilder } from './hist-build.js';
+import { binnedForGrowth, histBuilder } from './hist-build.js';
 import { checkHistTask } from './hist-check.js';
 import { breadthFirst, emitTree, type NodeRecord } from './hist-emit.js';
 import { finishChoice, pickChoice, type FinishedHistSplit } from './hist-finish.js';
@@ -63,7 +62,7 @@ interface Run {
  */
 export function growHistogram(task: GrowTask): GrowResult {
   const base = checkHistTask(task);
-  const binned = binnedFrameFor(task.frame);
+  const binned = binnedForGrowth(task.frame);
   const ws = openWorkspace(engine(), binned, task, base);
   try {
     return grow(task, ws, base.length);

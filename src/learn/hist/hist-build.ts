@@ -4,6 +4,9 @@
  * feature's block is summed by one thread, in row order.
  */
 import type { KernelSet } from '../../kernels/kernel-set.js';
+import { binnedFrameFor } from '../../table/bin-cache.js';
+import type { BinnedFrame } from '../../table/bin-frame.js';
+import type { Frame } from '../../table/frame.js';
 
 /** Arguments of one histogram build (pointers into the arena; see src/kernels/layout.ts). */
 export interface HistJob {
@@ -49,4 +52,17 @@ export function setHistBuilderFactory(factory: ((k: KernelSet) => HistBuilder) |
 /** The builder to use now. */
 export function histBuilder(k: KernelSet): HistBuilder {
   return current ? current(k) : inThreadBuilder(k);
+}
+
+/** How the grower gets the binned form of a frame (the parallel module may install a multi-threaded binner). */
+let binner: ((frame: Frame) => BinnedFrame) | null = null;
+
+/** Install a frame binner; null restores `binnedFrameFor` (in-thread, cached). */
+export function setFrameBinner(fn: ((frame: Frame) => BinnedFrame) | null): void {
+  binner = fn;
+}
+
+/** The binned form of `frame` for the grower (cached either way). */
+export function binnedForGrowth(frame: Frame): BinnedFrame {
+  return binner ? binner(frame) : binnedFrameFor(frame);
 }

@@ -3,14 +3,16 @@
  * but each histogram covers many rows × features). Helper threads map the kernel arena's shared memory
  * and wait on a control block; the calling thread writes a job, wakes them, builds its own share of the
  * features, and waits (Atomics) until every helper is done. Each feature's block is summed by exactly
- * one thread in row order, so histograms are bit-for-bit those of in-thread building.
+ * one thread in row order, so histograms are bit-for-bit those of in-thread building. Frames not yet
+ * binned are binned column by column on the same number of threads (bin-job.ts).
  */
 import { Worker } from 'node:worker_threads';
 import { engine } from '../../kernels/engine.js';
 import type { KernelSet } from '../../kernels/kernel-set.js';
 import { wasmModule } from '../../kernels/wasm-kernels.js';
 import { errors } from '../../errors.js';
-import { inThreadBuilder, setHistBuilderFactory, type HistBuilder, type HistJob } from '../hist/hist-build.js';
+import { inThreadBuilder, setFrameBinner, setHistBuilderFactory, type HistBuilder, type HistJob } from '../hist/hist-build.js';
+import { binFrameParallel } from './bin-job.js';
 import { C, CONTROL_SLOTS } from './hist-control.js';
 import { workerScriptUrl } from './package-root.js';
 
@@ -71,7 +73,7 @@ export function useHistogramWorkers(threads: number): number {
   stopHelpers();
   const eng = engine();
   const script = workerScriptUrl('hist-worker.js');
-  if (threads === 1 || !script || !eng.arena.shared) { setHistBuilderFactory(null); return 1; }
+  if (threads === 1 || !script || !eng.arena.shared) { setHistBuilderFactory(null); setFrameBinner(null); return 1; }
   const module = eng.kernels.name === 'wasm' ? wasmModule() : null;
   for (let i = 1; i < threads; i++) {
     const control = new Int32Array(new SharedArrayBuffer(CONTROL_SLOTS * 4));
@@ -80,6 +82,7 @@ export function useHistogramWorkers(threads: number): number {
     helpers.push({ worker, control });
   }
   setHistBuilderFactory(builder);
+  setFrameBinner((frame) => binFrameParallel(frame, threads));
   return threads;
 }
 

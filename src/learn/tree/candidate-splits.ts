@@ -36,7 +36,7 @@ export function candidateSplits(task: GrowTask): CandidateSplit[] {
   if (ctx.y !== null) {
     let w = 0, s = 0;
     for (const r of ctx.base) { w += ctx.w[r]; s += ctx.w[r] * ctx.y[r]; }
-    for (const r of ctx.base) ctx.yc[r] = ctx.y[r] - s / w;
+    for (const r of ctx.base) { ctx.yc[r] = ctx.y[r] - s / w; stats[1] += ctx.w[r] * ctx.yc[r]; }
     stats[0] = w;
   } else {
     for (const r of ctx.base) stats[ctx.classes![r]] += ctx.w[r];
@@ -45,7 +45,7 @@ export function candidateSplits(task: GrowTask): CandidateSplit[] {
   const tol = 1e-12 * Math.abs(weightedImpurity(ctx.measure, stats, 0, ctx.nCh));
   const out: CandidateSplit[] = [];
   for (let f = 0; f < ctx.nFeatures; f++) {
-    const c = ctx.numeric[f] !== null ? scanNumeric(ctx, f, 0, end, tol)
+    const c = ctx.numeric[f] !== null ? scanNumeric(ctx, f, 0, end, stats, tol)
       : task.settings.categorical === 'multiway' ? scanMultiway(ctx, f, 0, end) : scanSubset(ctx, f, 0, end, tol);
     if (!c) continue;
     const si = splitInfoOf(ctx, c);

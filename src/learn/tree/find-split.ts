@@ -12,13 +12,13 @@ import { scanMultiway, scanSubset } from './scan-categorical.js';
 import { scanNumeric } from './scan-numeric.js';
 import { gainRatioOf, type SplitChoice } from './split-choice.js';
 
-export function findSplit(ctx: GrowContext, features: readonly number[], start: number, end: number, nodeWeight: number, tol: number): SplitChoice | null {
+export function findSplit(ctx: GrowContext, features: readonly number[], start: number, end: number, nodeStats: Float64Array, nodeWeight: number, tol: number): SplitChoice | null {
   const candidates: SplitChoice[] = [];
   const multiway = ctx.settings.categorical === 'multiway';
   let floor = 0; // without gain ratio only a better score matters, so scans may skip worse features
   for (const f of features) {
     let c: SplitChoice | null;
-    if (ctx.numeric[f] !== null) c = scanNumeric(ctx, f, start, end, tol, floor);
+    if (ctx.numeric[f] !== null) c = scanNumeric(ctx, f, start, end, nodeStats, tol, floor);
     else if (multiway) c = scanMultiway(ctx, f, start, end);
     else c = scanSubset(ctx, f, start, end, tol);
     if (c !== null && c.score > tol) {

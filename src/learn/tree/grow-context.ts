@@ -34,6 +34,9 @@ export interface GrowContext {
   /** Child slot of each row during a partition. */
   readonly slot: Int32Array;
   readonly settings: GrowSettings;
+  /** Scratch channels reused by the numeric scans (length nCh). */
+  readonly scanTotal: Float64Array;
+  readonly scanLeft: Float64Array;
 }
 
 /** Add row `r` to the channels at `acc[off ..]`. */
@@ -98,5 +101,6 @@ export function createGrowContext(task: GrowTask): GrowContext {
     nCh, classes, y, yc: new Float64Array(n), leafRule,
     numeric, cats, nCats, names: frame.columns.map((c) => c.name), sorted, base,
     scratch: new Int32Array(nPos), slot: new Int32Array(n), settings,
+    scanTotal: new Float64Array(nCh), scanLeft: new Float64Array(nCh),
   };
 }

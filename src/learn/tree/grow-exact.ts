@@ -130,7 +130,7 @@ function openNode(ctx: GrowContext, task: GrowTask, builder: TreeBuilder, start:
     for (let f = 0; f < ctx.nFeatures; f++) if (!(used && used[f])) eligible.push(f);
     const features = sampleFeatures(eligible, s.featuresPerSplit, task.rng);
     const tol = REL_TOL * impurity;
-    const choice = findSplit(ctx, features, start, end, weight, tol);
+    const choice = findSplit(ctx, features, start, end, stats, weight, tol);
     if (choice) {
       const done = finishSplit(ctx, choice, stats, tol);
       if (done.gain > tol && done.gain >= s.minGain) split = done;
@@ -144,19 +144,20 @@ function expand(ctx: GrowContext, task: GrowTask, builder: TreeBuilder, node: Op
   const split = node.split as FinishedSplit;
   const f = split.feature;
   const slot = ctx.slot;
+  const base = ctx.base, end = node.end, missingSlot = split.missingSlot;
   if (split.kind === NUMERIC) {
-    const vals = ctx.numeric[f] as Float64Array;
-    for (let i = node.start; i < node.end; i++) {
-      const r = ctx.base[i], x = vals[r];
-      slot[r] = x !== x ? split.missingSlot : x <= split.threshold ? 0 : 1;
+    const vals = ctx.numeric[f] as Float64Array, threshold = split.threshold;
+    for (let i = node.start; i < end; i++) {
+      const r = base[i], x = vals[r];
+      slot[r] = x !== x ? missingSlot : x <= threshold ? 0 : 1;
     }
   } else {
     const codes = ctx.cats[f] as Int32Array;
     const map = split.kind === MULTIWAY ? (split.branchOf as Int32Array) : null;
     const inLeft = split.inLeft;
-    for (let i = node.start; i < node.end; i++) {
-      const r = ctx.base[i], c = codes[r];
-      if (c < 0) slot[r] = split.missingSlot;
+    for (let i = node.start; i < end; i++) {
+      const r = base[i], c = codes[r];
+      if (c < 0) slot[r] = missingSlot;
       else if (map) slot[r] = map[c];
       else slot[r] = (inLeft as Uint8Array)[c] ? 0 : 1;
     }

@@ -16,37 +16,35 @@ export function midpoint(a: number, b: number): number {
 }
 
 interface ScanBest { score: number; nLeft: number; threshold: number }
+/** Reused result slot of the inner scans (growing is single-threaded within one context). */
+const BEST: ScanBest = { score: 0, nLeft: -1, threshold: NaN };
 
 /**
  * The best threshold of feature `f` over `[start, end)`, or null when none beats `floor` (+ tol) or
  * none is valid.
  */
-export function scanNumeric(ctx: GrowContext, f: number, start: number, end: number, tol: number, floor = -Infinity): SplitChoice | null {
+export function scanNumeric(ctx: GrowContext, f: number, start: number, end: number, nodeStats: Float64Array, tol: number, floor = -Infinity): SplitChoice | null {
   const vals = ctx.numeric[f] as Float64Array;
   const seg = ctx.sorted[f] as Int32Array;
   const nCh = ctx.nCh;
-  const total = new Float64Array(nCh);
-  const w = ctx.w, cls = ctx.classes, yc = ctx.yc;
-  let kEnd = start;
-  if (cls !== null) {
-    for (; kEnd < end; kEnd++) { const r = seg[kEnd]; if (vals[r] !== vals[r]) break; total[cls[r]] += w[r]; }
-  } else {
-    let W = 0, S = 0;
-    for (; kEnd < end; kEnd++) { const r = seg[kEnd]; if (vals[r] !== vals[r]) break; W += w[r]; S += w[r] * yc[r]; }
-    total[0] = W; total[1] = S;
-  }
+  // rows missing the value sit at the end of the range
+  let kEnd = end;
+  while (kEnd > start && vals[seg[kEnd - 1]] !== vals[seg[kEnd - 1]]) kEnd--;
   const nKnown = kEnd - start;
   if (nKnown < 2 || nKnown < 2 * ctx.settings.leafRows) return null;
   if (vals[seg[start]] === vals[seg[kEnd - 1]]) return null;
-  const best: ScanBest = { score: floor, nLeft: -1, threshold: NaN };
+  const missingStats = new Float64Array(nCh);
+  for (let i = kEnd; i < end; i++) addRow(ctx, missingStats, 0, seg[i]);
+  const total = ctx.scanTotal;
+  for (let k = 0; k < nCh; k++) total[k] = nodeStats[k] - missingStats[k];
+  const best = BEST;
+  best.score = floor; best.nLeft = -1; best.threshold = NaN;
   if (ctx.classes !== null) scanClass(ctx, vals, seg, start, kEnd, total, tol, best);
   else scanValue(ctx, vals, seg, start, kEnd, total, tol, best);
   if (best.nLeft < 0) return null;
   const slotStats = new Float64Array(2 * nCh);
   for (let i = start; i < start + best.nLeft; i++) addRow(ctx, slotStats, 0, seg[i]);
-  for (let i = start + best.nLeft; i < kEnd; i++) addRow(ctx, slotStats, nCh, seg[i]);
-  const missingStats = new Float64Array(nCh);
-  for (let i = kEnd; i < end; i++) addRow(ctx, missingStats, 0, seg[i]);
+  for (let k = 0; k < nCh; k++) slotStats[nCh + k] = total[k] - slotStats[k];
   return {
     feature: f, kind: NUMERIC, threshold: best.threshold, inLeft: null, branchOf: null, nSlots: 2,
     slotStats, slotRows: Float64Array.of(best.nLeft, nKnown - best.nLeft),
@@ -92,7 +90,8 @@ function scanClass(ctx: GrowContext, vals: Float64Array, seg: Int32Array, start:
   const W = channelWeight(m, total, 0, nCh);
   const parent = weightedImpurity(m, total, 0, nCh);
   const nKnown = kEnd - start;
-  const left = new Float64Array(nCh);
+  const left = ctx.scanLeft;
+  left.fill(0);
   let wl = 0, prevAllowed = false, blockClass = -1, blockPure = false;
   for (let i = start; i < kEnd - 1; i++) {
     const r = seg[i], k = cls[r], a = vals[r];

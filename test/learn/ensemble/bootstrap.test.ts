@@ -23,6 +23,7 @@ describe('drawBootstrapCounts(n, rng)', () => {
       const mean = fr.reduce((a, b) => a + b, 0) / reps;
       const sd = Math.sqrt(fr.reduce((a, b) => a + (b - mean) ** 2, 0) / (reps - 1));
       const se = sd / Math.sqrt(reps);
+      console.info(`[bootstrap] n = ${n}: distinct fraction ${mean.toFixed(6)} (expected ${expected}, se ${se.toExponential(2)}, ${reps} samples)`);
       // tolerance: 4 standard errors of the mean over `reps` independent samples
       expect(Math.abs(mean - expected)).toBeLessThan(4 * se);
     });
