@@ -137,7 +137,9 @@ export function partitionRows(colPtr: usize, rowsPtr: usize, count: i32, lutPtr:
 /**
  * Best threshold of one feature's value histogram (bins 0..nBins-1; missing rows left out), scored by
  * weighted variance decrease with sums centred on `mean`. Writes to outPtr: [score, bin, leftRows, leftW,
- * leftS, knownRows, knownW, knownS]; bin = -1 when no valid threshold.
+ * leftS, knownRows, knownW, knownS]; bin = -1 when no valid threshold. The known totals are summed from
+ * the same bins as the left side (so a constant response scores exactly 0), and the scan stops once
+ * every known row is on the left.
  */
 export function scanValue(blockPtr: usize, nBins: i32, mean: f64, leafRows: f64, leafWeight: f64, tol: f64, outPtr: usize): void {
   let tn = 0.0, tw = 0.0, ts = 0.0, nonEmpty = 0;
@@ -160,6 +162,7 @@ export function scanValue(blockPtr: usize, nBins: i32, mean: f64, leafRows: f64,
     const n = load<f64>(p);
     if (n == 0) continue;
     ln += n; lw += load<f64>(p, 8); ls += load<f64>(p, 16);
+    if (ln >= tn) break;
     if (ln < leafRows || tn - ln < leafRows) continue;
     if (lw < leafWeight || tw - lw < leafWeight) continue;
     const lsc = ls - mean * lw;

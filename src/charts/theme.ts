@@ -61,7 +61,11 @@ export const FONT = '"Liberation Sans", Arial, Helvetica, sans-serif';
 /** Default plot area in pixels: about 700 px wide with axes and padding. */
 export const SIZE = { width: 560, height: 300 } as const;
 
-/** The vega-lite config every chart carries. */
+/**
+ * The vega-lite config every chart carries (axes, legends, titles, colours and font of the house look).
+ * @example
+ * const spec = { ...chartImportance(rows), config: houseConfig() }; // what every chart already does
+ */
 export function houseConfig(): Config {
   const axisCommon = {
     labelColor: '#4a5260',

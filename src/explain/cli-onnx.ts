@@ -12,6 +12,11 @@ import { modelToOnnx } from './onnx-export.js';
 
 const USAGE = 'coppice export-onnx <model.json> <out.onnx>';
 
+/**
+ * Run `coppice export-onnx` with the arguments after the command name; resolves to the exit code.
+ * @example
+ * await main(['model.json', 'model.onnx']); // 0
+ */
 export async function main(args: string[]): Promise<number> {
   const parsed = parseArgs('export-onnx', args, [], []);
   if (parsed.positional.length !== 2) throw errors.badArguments('export-onnx', `expected a model file and an output file; usage: ${USAGE}`);

@@ -20,7 +20,11 @@ import { scoreTable, type ScoredTable } from './score-table.js';
 
 const USAGE = 'coppice score <model.json> <extract> --out <file.csv|file.json> [--keep col,...] [--report <file.json>] [--strict]';
 
-/** Human summary of a scoring run (one line per kind of issue). */
+/**
+ * Human summary of a scoring run (one line per kind of issue).
+ * @example
+ * describeScoring(scoreTable(model, rows), 'scores.csv')[0]; // 'Scored 3 rows → scores.csv'
+ */
 export function describeScoring(s: ScoredTable, outPath: string): string[] {
   const a = s.align;
   const lines = [`Scored ${a.nRows} row${a.nRows === 1 ? '' : 's'} → ${outPath}`];
@@ -35,6 +39,11 @@ export function describeScoring(s: ScoredTable, outPath: string): string[] {
   return lines;
 }
 
+/**
+ * Run `coppice score` with the arguments after the command name; resolves to the exit code.
+ * @example
+ * await main(['model.json', 'march.csv', '--out', 'scores.csv']); // 0
+ */
 export async function main(args: string[]): Promise<number> {
   const parsed = parseArgs('score', args, ['out', 'keep', 'report'], ['strict']);
   if (parsed.positional.length !== 2) throw errors.badArguments('score', `expected a model file and an extract; usage: ${USAGE}`);

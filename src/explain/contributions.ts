@@ -30,7 +30,7 @@ export interface Contributions {
 }
 
 /** Options for `contributionsOf`. */
-export interface ContributionOptions {
+export interface ShapOptions {
   /** Rows of the frame to explain. __Default:__ every row. */
   readonly rows?: ArrayLike<number>;
 }
@@ -43,7 +43,7 @@ export interface ContributionOptions {
  * const c = contributionsOf(gb, test.features, { rows: [0, 1, 2] });
  * c.expected[0] + c.values[0].slice(0, p).reduce((a, b) => a + b); // === c.outputs[0][0]
  */
-export function contributionsOf(model: ModelHeader, frame: Frame, options: ContributionOptions = {}): Contributions {
+export function contributionsOf(model: ModelHeader, frame: Frame, options: ShapOptions = {}): Contributions {
   const form = additiveModelOf(model);
   const src = rowSourceFor(form.features, frame);
   const rows = Int32Array.from(options.rows ?? Array.from({ length: frame.nRows }, (_, i) => i));

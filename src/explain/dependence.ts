@@ -26,7 +26,7 @@ export interface DependenceCurves {
 }
 
 /** Options for `dependenceOn`. */
-export interface DependenceOptions {
+export interface DependenceOnOptions {
   /** Grid points for a numeric feature (quantiles). __Default:__ 20. */
   readonly gridSize?: number;
   /** Explicit grid: numbers, or category labels. __Default:__ quantiles or every category. */
@@ -39,7 +39,11 @@ export interface DependenceOptions {
   readonly seed?: number;
 }
 
-/** Index of feature `name` in `frame`, which must be aligned to the model. */
+/**
+ * Index of feature `name` in `frame`, which must be aligned to the model.
+ * @example
+ * featureIndex(model, frame, 'storage_hours'); // 0
+ */
 export function featureIndex(model: ModelHeader, frame: Frame, name: string): number {
   const j = model.features.findIndex((f) => f.name === name);
   if (j < 0) throw errors.unknownColumn(name, 'the model features');
@@ -47,7 +51,11 @@ export function featureIndex(model: ModelHeader, frame: Frame, name: string): nu
   return j;
 }
 
-/** A seeded sample of `m` of `n` rows, ascending. */
+/**
+ * A seeded sample of `m` of `n` rows, ascending (all rows when m ≥ n).
+ * @example
+ * sampleRows(1000, 5, 0); // five row numbers, the same for the same seed
+ */
 export function sampleRows(n: number, m: number, seed: number): Int32Array {
   if (m >= n) return Int32Array.from({ length: n }, (_, i) => i);
   const all = shuffleInPlace(derive(seed, 0x1ce), Int32Array.from({ length: n }, (_, i) => i));
@@ -61,7 +69,7 @@ export function sampleRows(n: number, m: number, seed: number): Int32Array {
  * const pd = dependenceOn(model, test.features, 'storage_hours', { output: 'spoiled' });
  * chartDependence(pd, { predictionName: pd.output });
  */
-export function dependenceOn(model: ModelHeader, frame: Frame, feature: string, options: DependenceOptions = {}): DependenceCurves {
+export function dependenceOn(model: ModelHeader, frame: Frame, feature: string, options: DependenceOnOptions = {}): DependenceCurves {
   const j = featureIndex(model, frame, feature);
   if (frame.nRows === 0) throw errors.emptyData('compute partial dependence');
   const curveRows = options.curveRows ?? 100;

@@ -10,14 +10,14 @@ export { studentQuantile } from './student-t.js';
 export { quantileSorted } from './quantile.js';
 // --- partial dependence and ICE ---
 export { dependenceOn } from './dependence.js';
-export type { DependenceCurves, DependenceOptions } from './dependence.js';
+export type { DependenceCurves, DependenceOnOptions } from './dependence.js';
 export { dependenceOnPair } from './dependence-pair.js';
 export type { DependenceSurface, PairOptions } from './dependence-pair.js';
 export { gridOf } from './grid-values.js';
 export type { FeatureGrid } from './grid-values.js';
 // --- TreeSHAP contributions ---
 export { contributionsOf } from './contributions.js';
-export type { ContributionOptions, Contributions } from './contributions.js';
+export type { ShapOptions, Contributions } from './contributions.js';
 export { contributionRow } from './contribution-row.js';
 export type { ContributionWalk } from './contribution-row.js';
 export { addTreeShap, prepareShapTree } from './tree-shap.js';
@@ -25,8 +25,7 @@ export type { ShapTree } from './tree-shap.js';
 // --- scoring outside the notebook ---
 export { scoreTable } from './score-table.js';
 export type { RangeIssue, ScoredTable } from './score-table.js';
-export { featureRangesOf, trainingRangesOf, withTrainingRanges } from './training-ranges.js';
-export type { TrainingRanges } from './training-ranges.js';
+export { trainingRangesOf, withTrainingRanges } from './training-ranges.js';
 export { scoreColumns, toCsvText, toJsonText } from './score-records.js';
 export type { ScoreColumns } from './score-records.js';
 // --- ONNX export ---

@@ -41,6 +41,11 @@ export function modelToOnnx(model: ModelHeader, options: { producerVersion?: str
   const K = form.nOutputs, p = form.features.length;
   if (p === 0) throw errors.onnxExport('the model has no feature columns');
   const t = ensembleTuples(form.members, form.features);
+  if (t.nodeIds.length === 0) {
+    // no trees kept (e.g. boosting stopped at round 0): one empty leaf so the operator has a tree; output = base
+    t.treeIds.push(0); t.nodeIds.push(0); t.featureIds.push(0); t.modes.push('LEAF'); t.values.push(0);
+    t.trueIds.push(0); t.falseIds.push(0); t.missingTrue.push(0);
+  }
   const nodes: OnnxNode[] = [{
     opType: 'TreeEnsembleRegressor', domain: ML, name: 'trees', inputs: ['features'], outputs: ['scores'],
     attributes: [

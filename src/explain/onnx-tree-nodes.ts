@@ -38,7 +38,11 @@ export interface EnsembleTuples {
 const f32 = new Float32Array(1);
 const i32 = new Int32Array(f32.buffer);
 
-/** The largest float32 value not above `t` (±Infinity kept). */
+/**
+ * The largest float32 value not above `t` (±Infinity kept).
+ * @example
+ * float32AtMost(0.1); // 0.09999999403953552
+ */
 export function float32AtMost(t: number): number {
   const f = Math.fround(t);
   if (f <= t || !Number.isFinite(t)) return f;

@@ -44,7 +44,12 @@ function csvField(v: unknown): string {
   return /[",\r\n]/.test(s) || s !== s.trim() ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
-/** The columns as CSV text with a header line (fields quoted when they hold a comma, quote or line break). */
+/**
+ * The columns as CSV text with a header line (fields quoted when they hold a comma, quote, line break or
+ * outer spaces; RFC 4180). NaN and missing values are empty fields.
+ * @example
+ * toCsvText({ names: ['a'], values: [[1, 2]] }); // 'a\n1\n2\n'
+ */
 export function toCsvText(t: ScoreColumns): string {
   const n = t.values[0]?.length ?? 0;
   const lines = [t.names.map(csvField).join(',')];
@@ -52,7 +57,11 @@ export function toCsvText(t: ScoreColumns): string {
   return `${lines.join('\n')}\n`;
 }
 
-/** The columns as a JSON array of records (NaN written as null). */
+/**
+ * The columns as a JSON array of records (NaN written as null).
+ * @example
+ * toJsonText({ names: ['a'], values: [[1, NaN]] }); // '[{"a":1},{"a":null}]\n'
+ */
 export function toJsonText(t: ScoreColumns): string {
   const n = t.values[0]?.length ?? 0;
   const rows: Record<string, unknown>[] = [];

@@ -27,7 +27,7 @@ export interface ScoredTable {
   readonly align: AlignReport;
   /** Values outside the training range per feature; null when the model records no ranges. */
   readonly ranges: readonly RangeIssue[] | null;
-  /** Per row, short notes on what was unusual ('' when nothing); absent columns are not repeated here. */
+  /** Per row, short notes on what was unusual ('' when nothing); absent or retyped columns are not repeated here. */
   readonly notes: readonly string[];
   /** Rows with at least one note. */
   readonly rowsWithNotes: number;
@@ -48,10 +48,12 @@ export function scoreTable(model: ModelHeader, input: TableInput): ScoredTable {
   const perRow: string[][] = Array.from({ length: frame.nRows }, () => []);
   const ranges = trainingRangesOf(model);
   const rangeIssues: RangeIssue[] = [];
+  const retyped = new Set(report.typeChanges.map((t) => t.column));
   frame.columns.forEach((col, j) => {
     const name = col.name;
     const source = present.has(name) ? name : model.features[j].origin?.source;
-    if (source === undefined || !present.has(source)) return; // absent: reported once, not per row
+    // absent or retyped columns are missing in every row: reported once, not per row
+    if (source === undefined || !present.has(source) || retyped.has(name)) return;
     const values = raw.values(source);
     if (col.kind === 'categorical') {
       for (let i = 0; i < frame.nRows; i++) if (col.codes[i] < 0 && !isMissingValue(values[i])) perRow[i].push(`unseen ${name}`);

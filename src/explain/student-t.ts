@@ -10,7 +10,11 @@
  */
 import { errors } from '../errors.js';
 
-/** P(|T| ≤ t) for Student's t with ν degrees of freedom (t ≥ 0). */
+/**
+ * P(|T| ≤ t) for Student's t with ν degrees of freedom (t ≥ 0).
+ * @example
+ * studentTwoSided(1, 1); // 0.5 (the Cauchy case)
+ */
 export function studentTwoSided(t: number, nu: number): number {
   const theta = Math.atan(t / Math.sqrt(nu));
   const s = Math.sin(theta), c = Math.cos(theta), c2 = c * c;

@@ -17,6 +17,13 @@ function newMemory(): { memory: WasmMemory; shared: boolean } {
   }
 }
 
+/**
+ * @example
+ * const a = new Arena();
+ * const p = a.put(Float64Array.of(1, 2));
+ * a.f64(p, 2); // Float64Array [1, 2], a view into the shared memory
+ * a.release(p);
+ */
 export class Arena {
   readonly memory: WasmMemory;
   readonly shared: boolean;

@@ -27,6 +27,7 @@ export function scanValueTs(buf: ArrayBufferLike, blockPtr: number, nBins: numbe
     const n = f64[h + b * 3];
     if (n === 0) continue;
     ln += n; lw += f64[h + b * 3 + 1]; ls += f64[h + b * 3 + 2];
+    if (ln >= tn) break;
     if (ln < leafRows || tn - ln < leafRows) continue;
     if (lw < leafWeight || tw - lw < leafWeight) continue;
     const lsc = ls - mean * lw;

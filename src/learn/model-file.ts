@@ -5,8 +5,10 @@
  * ```json
  * { "format": "coppice-model", "version": 1, "kind": "tree", "task": "classification",
  *   "features": [...], "target": {...}, "settings": {...}, "seed": 0,
- *   "fingerprint": { "schema": "...", "data": "..." }, "created": "2025-01-01T00:00:00.000Z", "body": {...} }
+ *   "fingerprint": { "schema": "...", "data": "..." }, "ranges": { "x": [0, 9] },
+ *   "created": "2025-01-01T00:00:00.000Z", "body": {...} }
  * ```
+ * `ranges` (optional) holds [min, max] of each numeric training feature, for scoring reports.
  * Numbers JSON cannot hold are written as `{ "$number": "NaN" | "Infinity" | "-Infinity" }`. Reading
  * checks every field and never evaluates code; a newer format version is refused with the version
  * this build reads.
@@ -75,6 +77,7 @@ export function modelToJSON(model: ModelHeader, options: { created?: string } = 
     settings: encodeValue(model.settings),
     seed: model.seed,
     fingerprint: { schema: model.fingerprint.schema, data: model.fingerprint.data },
+    ...(model.ranges ? { ranges: encodeValue(model.ranges) } : {}),
     created,
     body: codec.encode(model as never),
   };
@@ -141,6 +144,7 @@ export function modelFromJSON(json: unknown): AnyModel & { readonly created: str
     settings,
     seed: readInt(o.seed, 'seed', -4294967296, 4294967296),
     fingerprint: { schema: readString(fp.schema, 'fingerprint.schema'), data: readString(fp.data, 'fingerprint.data') },
+    ...(o.ranges === undefined ? {} : { ranges: readRanges(o.ranges) }),
   };
   const created = readString(o.created, 'created');
   if (o.body === undefined) throw errors.badModel('body is missing');
@@ -152,6 +156,20 @@ export function modelFromJSON(json: unknown): AnyModel & { readonly created: str
     throw errors.badModel(e instanceof Error ? e.message : String(e));
   }
   return { ...(model as AnyModel), created };
+}
+
+function readRanges(json: unknown): Record<string, [number, number]> {
+  const o = readObject(json, 'ranges');
+  const out: Record<string, [number, number]> = {};
+  for (const [name, v] of Object.entries(o)) {
+    const pair = readArray(v, `ranges.${name}`);
+    const lo = decodeValue(pair[0], `ranges.${name}[0]`), hi = decodeValue(pair[1], `ranges.${name}[1]`);
+    if (pair.length !== 2 || typeof lo !== 'number' || typeof hi !== 'number' || !(lo <= hi)) {
+      throw errors.badModel(`ranges.${name} should be [min, max] with min <= max`);
+    }
+    out[name] = [lo, hi];
+  }
+  return out;
 }
 
 let tempCounter = 0;

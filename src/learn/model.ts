@@ -28,6 +28,8 @@ export interface ModelHeader {
   readonly seed: number;
   /** Fingerprints of the training data: schema and values. */
   readonly fingerprint: { readonly schema: string; readonly data: string };
+  /** [min, max] of each numeric feature in the training data, so scoring can flag values outside it. */
+  readonly ranges?: Readonly<Record<string, readonly [number, number]>>;
 }
 
 /** Predictions for n rows. */

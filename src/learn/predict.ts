@@ -15,6 +15,8 @@ export type AnyModel = TreeModel;
 /**
  * Turn n × K class scores (probabilities) into predictions: the predicted class is the most probable
  * one (ties: the lower class index).
+ * @example
+ * classPredictions(Float64Array.of(0.2, 0.8), 1, ['no', 'yes']).value; // [1]
  */
 export function classPredictions(proba: Float64Array, n: number, classes: readonly string[]): Predictions {
   const k = classes.length;

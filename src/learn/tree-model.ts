@@ -14,7 +14,11 @@ export interface TreeModel extends ModelHeader {
   readonly droppedRows: number;
 }
 
-/** True when `model` is a single-tree model. */
+/**
+ * True when `model` is a single-tree model.
+ * @example
+ * if (isTreeModel(model)) console.log(model.tree.nNodes);
+ */
 export function isTreeModel(model: { readonly kind: string }): model is TreeModel {
   return model.kind === 'tree';
 }

@@ -73,7 +73,11 @@ export interface RunComparison {
   readonly exitCode: 0 | 1 | 2;
 }
 
-/** Exit code for a run on its own: 2 failed, 1 a decision check fails, else 0. */
+/**
+ * Exit code for a run on its own: 2 failed, 1 a decision check fails, else 0.
+ * @example
+ * runExitCode(readRunRecord('runs/latest.json')); // 1 when a decision check no longer holds
+ */
 export function runExitCode(run: RunRecord): 0 | 1 | 2 {
   if (run.status !== 'ok') return 2;
   return run.decisions.some((d) => d.checks.some((c) => !c.holds)) ? 1 : 0;

@@ -63,7 +63,12 @@ function isCustom(c: CheckSpec): c is CustomCheck {
   return typeof (c as CustomCheck).label === 'string' && typeof (c as CustomCheck).holds === 'boolean';
 }
 
-/** Validate a check given as an object or text; returns the object form. */
+/**
+ * Validate a check given as an object or text; returns the object form.
+ * @example
+ * normalizeCheck('holdout mae <= 0.6'); // { metric: 'holdout mae', atMost: 0.6 }
+ * normalizeCheck({ feature: 'truck_temp_c', withinTop: 3, table: 'importance' }); // returned as given
+ */
 export function normalizeCheck(check: unknown): CheckSpec {
   if (typeof check === 'string') return parseCheck(check);
   if (!check || typeof check !== 'object') throw errors.badCheck(check, 'expected an object or text');

@@ -17,7 +17,12 @@ import { profileColumn, type ColumnProfile } from './record-profile.js';
 
 const NAME = /^[A-Za-z_$][A-Za-z0-9_$]*$/;
 
-/** True when a source names a query rather than a file (`sql:...`). */
+/**
+ * True when a source names a query rather than a file (`sql:...`).
+ * @example
+ * isQuerySource('sql:SELECT * FROM pallets'); // true
+ * isQuerySource('data/pallets-spring.csv');    // false
+ */
 export function isQuerySource(source: string): boolean {
   return /^sql:/i.test(source.trim());
 }
@@ -43,7 +48,12 @@ function environmentOverrides(): Record<string, string> {
   return out;
 }
 
-/** Which source a name resolves to now, and whether it was overridden. */
+/**
+ * Which source a name resolves to now, and whether it was overridden (by `coppice run --extract` or the
+ * `COPPICE_EXTRACTS` environment variable).
+ * @example
+ * resolveExtractSource('pallets', 'data/pallets-spring.csv'); // { source: 'data/pallets-spring.csv', overridden: false }
+ */
 export function resolveExtractSource(name: string, defaultSource: string): { source: string; overridden: boolean } {
   const session = currentRunState().extractOverrides;
   if (Object.prototype.hasOwnProperty.call(session, name)) return { source: session[name], overridden: true };

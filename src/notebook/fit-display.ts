@@ -6,6 +6,10 @@ import type { ModelHeader } from '../learn/model.js';
 import type { Dataset } from '../table/frame.js';
 import type { TableInput } from '../table/raw-table.js';
 import { toDataset, type ToDatasetOptions } from '../table/to-dataset.js';
+import { readHeldOut } from './held-out-data.js';
+import { isDataset } from './is-dataset.js';
+import { progressOptions } from './fit-progress.js';
+import { learnerTable, tableOptions } from './magic-learners.js';
 import { modelBundle } from './model-bundle.js';
 import type { Progress } from './progress.js';
 import { startProgress } from './progress.js';
@@ -24,15 +28,13 @@ export interface FitData {
 
 const dataKeys = ['data', 'target', 'features', 'exclude', 'weight', 'missingTarget'] as const;
 
-function isDataset(x: unknown): x is Dataset {
-  const d = x as Partial<Dataset> | null;
-  return d != null && typeof d === 'object' && d.features != null && d.target != null && 'weights' in d;
-}
 
 /**
  * Fit with `fit`, showing progress while it runs and the model summary (named `name`) when done.
  * `request` holds the data settings (`data`, `target`, `features`, `exclude`, `weight`, `missingTarget`);
- * every other key is passed to `fit` as a learner option. A `watch` table is read like the data.
+ * every other key is passed to `fit` as a learner option. A table given as `watch` or `pruneOn` (see
+ * `tableOptions`) is read like the training rows (`readHeldOut`: same features, dictionaries and classes). When `learner` names a
+ * learner of `learnerTable` with a progress callback, the display shows its rounds or trees as they finish.
  * @example
  * const forest = await watchFit('forest', 'forest', (d, o) => fitForest(d, o), { data: train, target: 'species', size: 200 });
  */
@@ -44,7 +46,8 @@ export async function watchFit<M extends ModelHeader>(
 ): Promise<M> {
   const options: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(request)) if (!(dataKeys as readonly string[]).includes(k) && v !== undefined) options[k] = v;
-  const progress = startProgress(`fitting ${name} (${learner})`, { unit: 'step' });
+  const rule = Object.hasOwn(learnerTable, learner) ? learnerTable[learner] : undefined;
+  const progress = startProgress(`fitting ${name} (${learner})`, { unit: rule?.progress?.unit ?? 'step' });
   try {
     let data: Dataset;
     if (isDataset(request.data)) data = request.data;
@@ -58,9 +61,11 @@ export async function watchFit<M extends ModelHeader>(
       };
       data = toDataset(request.data as TableInput, o);
     }
-    if (options.watch !== undefined && !isDataset(options.watch)) {
-      options.watch = toDataset(options.watch as TableInput, { target: data.target.name, features: data.features.columns.map((c) => c.name) });
+    for (const key of tableOptions) {
+      if (options[key] === undefined || isDataset(options[key])) continue;
+      options[key] = readHeldOut(options[key] as TableInput, data);
     }
+    Object.assign(options, progressOptions(rule, progress, options));
     await new Promise((done) => setImmediate(done));
     const model = await fit(data, options, progress);
     progress.finish(modelBundle(model, name));

@@ -3,12 +3,14 @@
  * executor behind it. Compared with tslab's own handler it adds what notebook tools rely on: an
  * `execute_input` broadcast, an `error` message with name, value and traceback when a cell fails, rich
  * display bundles whose JSON entries stay objects, and output of timers and progress after a cell ends
- * routed to the cell that started them.
+ * routed to the cell that started them. tslab's notices about message types it does not handle go to the
+ * kernel's log, never into a cell's output.
  */
 import type { DisplayMessage, OutputHooks } from './display-types.js';
 import { installSink } from './display-sink.js';
 import type { CellError, CellExecutor } from './executor.js';
 import { createCellExecutor } from './executor.js';
+import { isKernelNotice } from './kernel-notices.js';
 import { loadTslab } from './tslab-types.js';
 
 /** A Jupyter message as tslab's server holds it. */
@@ -85,10 +87,12 @@ export async function startKernel(options: KernelOptions): Promise<void> {
   };
   installSink(hooks);
   const realStdout = process.stdout.write.bind(process.stdout);
+  const realStderr = process.stderr.write.bind(process.stderr);
   for (const name of ['stdout', 'stderr'] as const) {
     process[name].write = ((chunk: string | Uint8Array, ...rest: unknown[]) => {
       const text = typeof chunk === 'string' ? chunk : Buffer.from(chunk).toString('utf8');
-      if (parent) hooks.onStream?.(name, text);
+      if (name === 'stderr' && isKernelNotice(text)) realStderr(text);
+      else if (parent) hooks.onStream?.(name, text);
       else if (name === 'stdout') realStdout(text);
       const done = rest.find((r) => typeof r === 'function') as (() => void) | undefined;
       done?.();

@@ -13,13 +13,14 @@
  *       target: "species",
  *       depthLimit: 3,
  *     });
- * Learner names, functions and settings come from `learnerTable`.
+ * Learner names, functions and settings come from `learnerTable`; a setting may also be written with its
+ * option's API name (`depthLimit: 3`). A tree with a pruning setting calls `fitPrunedTree`.
  */
 import type { MagicDefinition } from './magic-compile.js';
 import { RUNTIME, isIdentifier, quote } from './magic-compile.js';
-import { dataSettings, learnerTable } from './magic-learners.js';
+import { dataSettings, findSetting, learnerTable } from './magic-learners.js';
 import { magicError } from './magic-parse.js';
-import { parseSettings } from './magic-settings.js';
+import { parseSettings, type Setting } from './magic-settings.js';
 import { valueSource } from './magic-values.js';
 
 export const fitMagic: MagicDefinition = {
@@ -41,15 +42,22 @@ export const fitMagic: MagicDefinition = {
       magicError({ line: call.argsAt.line, column: call.argsAt.column + call.args.indexOf(extra, learnerColumn - call.argsAt.column + learner.length) }, call.text, extra.length, 'settings go on their own lines below, as "name: value"');
     }
     const settings = parseSettings(call);
-    const out = [`const ${name} = await ${RUNTIME}.watchFit(${quote(name)}, ${quote(learner)}, (d, o) => ${RUNTIME}.${rule.fn}(d, o), {`, ...call.body.map(() => '')];
     const known = { ...dataSettings, ...rule.settings };
+    const given = new Map<string, Setting>();
+    const lines: [number, string][] = [];
     for (const s of settings) {
-      const r = known[s.key];
+      const r = findSetting(known, s.key);
       if (!r) magicError(s.keyAt, s.line, s.key.length, `unknown setting ${JSON.stringify(s.key)} for ${learner}; known: ${Object.keys(known).join(', ')}`);
-      out[s.first - call.lineIndex] = `  ${r.option}: ${valueSource(s, r.value)},`;
+      const twice = given.get(r.option);
+      if (twice) magicError(s.keyAt, s.line, s.key.length, `${s.key} sets ${r.option} again (first at line ${twice.keyAt.line})`);
+      given.set(r.option, s);
+      lines.push([s.first - call.lineIndex, `  ${r.option}: ${valueSource(s, r.value)},`]);
     }
+    const fn = rule.variant && rule.variant.when.some((o) => given.has(o)) ? rule.variant.fn : rule.fn;
+    const out = [`const ${name} = await ${RUNTIME}.watchFit(${quote(name)}, ${quote(learner)}, (d, o) => ${RUNTIME}.${fn}(d, o), {`, ...call.body.map(() => '')];
+    for (const [at, text] of lines) out[at] = text;
     for (const required of ['data', 'target']) {
-      if (!settings.some((s) => s.key === required)) {
+      if (!given.has(required)) {
         magicError(call.nameAt, call.text, call.name.length, `%%fit needs a "${required}:" line`);
       }
     }

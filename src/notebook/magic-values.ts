@@ -2,7 +2,7 @@
  * Turn a magic setting's text into TypeScript source for its value, with a caret error when the text
  * does not fit the expected kind.
  */
-import { quote } from './magic-compile.js';
+import { isIdentifier, quote } from './magic-compile.js';
 import { magicError } from './magic-parse.js';
 import type { Setting } from './magic-settings.js';
 import type { MagicSettingKind } from './magic-learners.js';
@@ -19,6 +19,7 @@ function unquoted(text: string): string {
  * @example
  * valueSource({ value: '3', ... }, 'int');         // '3'
  * valueSource({ value: 'a, b', ... }, 'words');    // '["a", "b"]'
+ * valueSource({ value: 'a, b', ... }, 'names');    // '{ a: a, b: b }' (written out: tslab does not rewrite shorthand properties)
  */
 export function valueSource(setting: Setting, kind: MagicSettingKind): string {
   const v = setting.value;
@@ -42,6 +43,11 @@ export function valueSource(setting: Setting, kind: MagicSettingKind): string {
       return quote(unquoted(v));
     case 'words':
       return `[${v.split(',').map((w) => unquoted(w)).filter((w) => w !== '').map(quote).join(', ')}]`;
+    case 'names': {
+      const names = v.split(',').map((n) => n.trim());
+      if (names.every((n) => isIdentifier(n))) return `{ ${names.map((n) => `${n}: ${n}`).join(', ')} }`;
+      return `(${v.replace(/\n/g, ' ')})`;
+    }
     case 'expr':
       return `(${v.replace(/\n/g, " ")})`;
   }

@@ -40,6 +40,18 @@ function treeSize(trees: readonly FlatTree[]): string {
   return trees.length === 1 ? `${nodes} nodes, ${leaves} leaves` : `${trees.length} trees, ${nodes} nodes, ${leaves} leaves`;
 }
 
+/** How a tree was pruned, from the `settings.pruning` record the pruning functions write; null if not. */
+function pruningText(p: unknown): string | null {
+  if (p == null || typeof p !== 'object') return null;
+  const r = p as Loose;
+  if (r.method === 'reducedError') return `reduced error, on ${String(r.heldOutRows)} held-out rows`;
+  if (r.method === 'costComplexity') {
+    const on = r.evaluation === 'heldOut' ? 'held-out rows' : `${String(r.folds)}-fold cross-validation`;
+    return `cost complexity, α = ${formatCell(r.alpha)} (rule ${String(r.rule)}, ${on})`;
+  }
+  return String(r.method);
+}
+
 /** Label → value lines summarising `model`. */
 export function modelFacts(model: ModelHeader): [string, string][] {
   const m = model as unknown as Loose;
@@ -51,10 +63,16 @@ export function modelFacts(model: ModelHeader): [string, string][] {
   if (trees.length > 0) facts.push(['size', treeSize(trees)]);
   if (Array.isArray(m.members)) facts.push(['members', (m.members as { name: string }[]).map((x) => x.name).join(', ')]);
   if (typeof m.trainingRows === 'number') facts.push(['training rows', String(m.trainingRows)]);
+  const lossName = typeof m.loss === 'string' ? ` (${m.loss})` : '';
   const train = last(m.trainLoss);
-  if (train != null) facts.push([`training ${String(m.loss ?? 'loss')}`, formatCell(train)]);
+  if (train != null) facts.push([`training loss${lossName}`, `${formatCell(train)} after round ${(m.trainLoss as number[]).length - 1}`]);
   const watch = last(m.watchLoss);
-  if (watch != null) facts.push([`watched ${String(m.loss ?? 'loss')}`, `${formatCell(watch)} (best round ${String(m.bestRound)}, kept ${String(m.roundsKept)})`]);
+  if (watch != null) {
+    const curve = m.watchLoss as number[];
+    const best = typeof m.bestRound === 'number' ? m.bestRound : curve.length - 1;
+    const kept = m.roundsKept !== curve.length - 1 ? `; model keeps rounds 1–${String(m.roundsKept)}` : '';
+    facts.push([`watched loss${lossName}`, `${formatCell(watch)} after round ${curve.length - 1}; lowest ${formatCell(curve[best])} after round ${best}${kept}`]);
+  }
   if (Array.isArray(m.rounds) && m.rounds.length > 0) {
     const r = m.rounds[m.rounds.length - 1] as Loose;
     facts.push(['training error', formatCell(r.trainError)]);
@@ -66,6 +84,8 @@ export function modelFacts(model: ModelHeader): [string, string][] {
   if (Array.isArray(m.foldScores)) {
     facts.push(['fold scores', (m.foldScores as { name: string; score: number }[]).map((s) => `${s.name} ${formatCell(s.score)}`).join(', ')]);
   }
+  const pruned = pruningText(model.settings.pruning);
+  if (pruned) facts.push(['pruned', pruned]);
   const settings = Object.entries(model.settings).filter(([, v]) => v !== undefined && typeof v !== 'function' && typeof v !== 'object');
   if (settings.length > 0) facts.push(['settings', settings.map(([k, v]) => `${k}=${formatCell(v)}`).join(', ')]);
   if (model.seed) facts.push(['seed', String(model.seed)]);

@@ -12,8 +12,11 @@ import { formatCell } from './format-cell.js';
 import { escapeHtml } from './html-escape.js';
 
 export interface Progress {
-  /** Report that `done` units of the total are finished, with the latest scores. */
-  step(done: number, scores?: Readonly<Record<string, number>>): void;
+  /**
+   * Report that `done` units of the total are finished, with the latest scores; `total` (when given)
+   * replaces the total set at the start (a learner may only know it once it runs).
+   */
+  step(done: number, scores?: Readonly<Record<string, number>>, total?: number): void;
   /** Replace the progress output with `summary` (a bundle or text). */
   finish(summary?: MimeBundle | string): void;
   /** Mark the work as stopped with `reason`, keeping the last progress shown. */
@@ -80,19 +83,21 @@ export function startProgress(label: string, options: ProgressOptions = {}): Pro
     emitDisplay({ data, metadata: {}, transient: { display_id: id } }, shown);
     shown = true;
   };
+  let total = options.total;
   const render = (done: number, scores: Readonly<Record<string, number>>) => {
-    lastLine = progressLine(label, unit, done, options.total, scores, now() - started);
-    if (rich) send({ 'text/html': `<div class="coppice-progress">${escapeHtml(lastLine)}${bar(done, options.total)}</div>`, 'text/plain': lastLine });
+    lastLine = progressLine(label, unit, done, total, scores, now() - started);
+    if (rich) send({ 'text/html': `<div class="coppice-progress">${escapeHtml(lastLine)}${bar(done, total)}</div>`, 'text/plain': lastLine });
     else writeStream('stderr', `\r${lastLine}`);
   };
   render(0, {});
   lastSent = now();
 
   return {
-    step(done, scores = {}) {
+    step(done, scores = {}, newTotal) {
       if (ended) return;
+      if (newTotal !== undefined) total = newTotal;
       const t = now();
-      const final = options.total !== undefined && done >= options.total;
+      const final = total !== undefined && done >= total;
       if (!final && t - lastSent < interval) return;
       lastSent = t;
       render(done, scores);

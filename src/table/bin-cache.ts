@@ -51,7 +51,11 @@ export function cachedBinnedFrame(frame: Frame, options: BinOptions = {}): Binne
   return byFrame.get(frame)?.get(optionsKey(options)) ?? null;
 }
 
-/** Store a binned frame built elsewhere (e.g. by a streaming reader) as the binned form of `frame`. */
+/**
+ * Store a binned frame built elsewhere (e.g. on worker threads) as the binned form of `frame`.
+ * @example
+ * rememberBinnedFrame(frame, binFrame(frame));
+ */
 export function rememberBinnedFrame(frame: Frame, binned: BinnedFrame, options: BinOptions = {}): void {
   if (binned.nRows !== frame.nRows || binned.features.length !== frame.columns.length) {
     throw errors.binnedMismatch(`${binned.nRows} rows × ${binned.features.length} features for ${frame.nRows} × ${frame.columns.length}`);

@@ -17,13 +17,19 @@ import { QuantileSketch } from './bin-sketch.js';
 /**
  * Midpoint of a < b that lies in [a, b) even for huge or adjacent floats. The same formula as the exact
  * grower's (src/learn/tree/scan-numeric.ts), so both growers write the same thresholds.
+ * @example
+ * midpoint(1, 2); // 1.5
  */
 export function midpoint(a: number, b: number): number {
   const t = a / 2 + b / 2;
   return t >= a && t < b ? t : a;
 }
 
-/** Distinct non-NaN values of `values` in ascending order, or null when there are more than `limit`. */
+/**
+ * Distinct non-NaN values of `values` in ascending order, or null when there are more than `limit`.
+ * @example
+ * distinctUpTo(Float64Array.of(3, 1, 3), 255); // Float64Array [1, 3]
+ */
 export function distinctUpTo(values: Float64Array, limit: number): Float64Array | null {
   const seen = new Set<number>();
   for (let i = 0; i < values.length; i++) {
@@ -39,6 +45,8 @@ export function distinctUpTo(values: Float64Array, limit: number): Float64Array 
  * Greedy equal-count cuts: a bin closes after distinct value j when its weight reaches an equal share of
  * the weight not yet binned (remaining weight / bins left), so a heavy value does not starve the rest.
  * Returns the indices j after which a bin closes (at most limit-1 of them).
+ * @example
+ * equalCountCuts(Float64Array.of(1, 1, 1, 1), 2); // [1]
  */
 export function equalCountCuts(weights: Float64Array, limit: number): number[] {
   let total = 0;
@@ -84,7 +92,11 @@ function boundsFromSketch(sketch: QuantileSketch, limit: number): Float64Array {
   return upper;
 }
 
-/** Upper bounds of one bin per distinct value (midpoints), last = +Infinity. */
+/**
+ * Upper bounds of one bin per distinct value (midpoints), last = +Infinity.
+ * @example
+ * boundsFromDistinct(Float64Array.of(1, 2)); // Float64Array [1.5, Infinity]
+ */
 export function boundsFromDistinct(distinct: Float64Array): Float64Array {
   const n = Math.max(distinct.length, 1);
   const upper = new Float64Array(n);
@@ -144,7 +156,12 @@ export function numericBounds(values: Float64Array, opts: BoundsOptions): Float6
   return boundsFromSketch(sketch, opts.limit);
 }
 
-/** Bin bounds from a sketch built elsewhere (streaming reads), with the same cut rule. */
+/**
+ * Bin bounds from a sketch built elsewhere (e.g. merged from chunks), with the same cut rule; `distinct`
+ * (when known and within the limit) gives one bin per value instead.
+ * @example
+ * sketchBounds(sketch, null, 255);
+ */
 export function sketchBounds(sketch: QuantileSketch, distinct: Float64Array | null, limit: number): Float64Array {
   if (distinct && distinct.length <= limit) return boundsFromDistinct(distinct);
   return boundsFromSketch(sketch, limit);

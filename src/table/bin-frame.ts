@@ -50,7 +50,11 @@ export interface ResolvedBinOptions {
   readonly sketchK: number;
 }
 
-/** Fill in and check bin options. */
+/**
+ * Fill in and check bin options.
+ * @example
+ * resolveBinOptions({ binLimit: 63 }); // { binLimit: 63, exactRows: 1048576, sketchK: 800 }
+ */
 export function resolveBinOptions(opts: BinOptions = {}): ResolvedBinOptions {
   const binLimit = opts.binLimit ?? 255;
   const exactRows = opts.exactRows ?? 1 << 20;
@@ -61,7 +65,11 @@ export function resolveBinOptions(opts: BinOptions = {}): ResolvedBinOptions {
   return { binLimit, exactRows, sketchK };
 }
 
-/** Bin code of x given upper bounds (binary search for the first bound >= x); NaN -> MISSING_BIN. */
+/**
+ * Bin code of x given upper bounds (binary search for the first bound >= x); NaN -> MISSING_BIN.
+ * @example
+ * binOfValue(Float64Array.of(1.5, Infinity), 2); // 1
+ */
 export function binOfValue(upper: Float64Array, x: number): number {
   if (x !== x) return MISSING_BIN;
   let lo = 0, hi = upper.length - 1;
@@ -72,12 +80,20 @@ export function binOfValue(upper: Float64Array, x: number): number {
   return lo;
 }
 
-/** Write the codes of a numeric column into `out` (same length as `values`). */
+/**
+ * Write the codes of a numeric column into `out` (same length as `values`).
+ * @example
+ * codeNumeric(Float64Array.of(1, NaN), Float64Array.of(1.5, Infinity), out); // out = [0, 255]
+ */
 export function codeNumeric(values: Float64Array, upper: Float64Array, out: Uint8Array): void {
   for (let i = 0; i < values.length; i++) out[i] = binOfValue(upper, values[i]);
 }
 
-/** Bin of each category code: identity up to `limit` categories, else the most frequent keep their own bin. */
+/**
+ * Bin of each category code: identity up to `limit` categories, else the most frequent keep their own bin.
+ * @example
+ * categoryBins(column, 255).binOfCode; // [0, 1, 2, ...]
+ */
 export function categoryBins(col: CategoricalColumn, limit: number): { binOfCode: Uint8Array; nBins: number } {
   const k = col.categories.length;
   const binOfCode = new Uint8Array(k);

@@ -3,7 +3,11 @@
  */
 import type { Column, Dataset, Frame, Target } from './frame.js';
 
-/** A new frame holding rows `rows` (indices may repeat) of `frame`, with the same schema. */
+/**
+ * A new frame holding rows `rows` (indices may repeat) of `frame`, with the same schema.
+ * @example
+ * const firstTwo = takeRows(frame, [0, 1]); // firstTwo.nRows === 2
+ */
 export function takeRows(frame: Frame, rows: ArrayLike<number>): Frame {
   const n = rows.length;
   const columns: Column[] = frame.columns.map((c) => {
@@ -31,7 +35,12 @@ function takeTarget(t: Target, rows: ArrayLike<number>): Target {
   return { ...t, values };
 }
 
-/** A new dataset holding rows `rows` of `data` (features, target and weights). */
+/**
+ * A new dataset holding rows `rows` of `data` (features, target and weights).
+ * @example
+ * const [fold] = splitHoldout(data, { seed: 1 });
+ * const train = takeDataset(data, fold.train);
+ */
 export function takeDataset(data: Dataset, rows: ArrayLike<number>): Dataset {
   let weights: Float64Array | null = null;
   if (data.weights) {

@@ -28,7 +28,11 @@ export function quoteText(text: string): string {
   return `'${text.replace(/'/g, "''")}'`;
 }
 
-/** A label for messages, and the SQL relation to read from. */
+/**
+ * A label for messages, and the SQL relation to read from.
+ * @example
+ * relationOf('x.parquet').sql; // read_parquet('x.parquet')
+ */
 export function relationOf(source: DuckInput): { label: string; sql: string } {
   if (typeof source === 'object' && source !== null && typeof source.query === 'string') return { label: source.query, sql: `(${source.query})` };
   if (typeof source !== 'string' || source.length === 0) throw errors.badOption('source', source, "a .parquet path, 'sql:SELECT ...' or { query }");

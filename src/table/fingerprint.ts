@@ -5,7 +5,11 @@
 import { Fnv64 } from '../util/hash.js';
 import type { ColumnSchema, Dataset, Frame } from './frame.js';
 
-/** Fingerprint of column names, kinds, dictionaries and date origins, in order. */
+/**
+ * Fingerprint of column names, kinds, dictionaries and date origins, in order.
+ * @example
+ * schemaFingerprint(frame.schema.columns) === frame.schema.fingerprint; // true
+ */
 export function schemaFingerprint(columns: readonly ColumnSchema[]): string {
   const h = new Fnv64();
   for (const c of columns) {
@@ -16,7 +20,11 @@ export function schemaFingerprint(columns: readonly ColumnSchema[]): string {
   return h.hex();
 }
 
-/** Fingerprint of a frame's schema and every value. */
+/**
+ * Fingerprint of a frame's schema and every value.
+ * @example
+ * frameFingerprint(frame) === frameFingerprint(takeRows(frame, [...Array(frame.nRows).keys()])); // true
+ */
 export function frameFingerprint(frame: Frame): string {
   const h = new Fnv64().string(frame.schema.fingerprint).string(String(frame.nRows));
   for (const c of frame.columns) {
@@ -26,7 +34,11 @@ export function frameFingerprint(frame: Frame): string {
   return h.hex();
 }
 
-/** Fingerprint of a dataset: features, target and weights. */
+/**
+ * Fingerprint of a dataset: features, target and weights.
+ * @example
+ * model.fingerprint.data === dataFingerprint(train); // true for a model fitted on `train`
+ */
 export function dataFingerprint(data: Dataset): string {
   const h = new Fnv64().string(frameFingerprint(data.features)).string(data.target.name);
   if (data.target.kind === 'class') { for (const k of data.target.classes) h.string(k); h.typed(data.target.codes); }

@@ -67,10 +67,20 @@ export interface Dataset {
   readonly weights: Float64Array | null;
 }
 
+/**
+ * True for a categorical column (codes into a dictionary), narrowing its type.
+ * @example
+ * frame.columns.filter(isCategorical).map((c) => c.categories.length);
+ */
 export function isCategorical(c: Column): c is CategoricalColumn {
   return c.kind === 'categorical';
 }
 
+/**
+ * True for a column held as numbers (numeric, or boolean as 0/1), narrowing its type.
+ * @example
+ * frame.columns.filter(isNumeric).map((c) => c.values.length);
+ */
 export function isNumeric(c: Column): c is NumericColumn {
   return c.kind !== 'categorical';
 }

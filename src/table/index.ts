@@ -30,3 +30,5 @@ export type { AlignReport } from './align-frame.js';
 export { glance } from './glance.js';
 export type { GlanceRow } from './glance.js';
 export type { EncodedKind } from './value-counts.js';
+export { featureRangesOf } from './ranges.js';
+export type { TrainingRanges } from './ranges.js';

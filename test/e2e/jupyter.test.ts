@@ -43,6 +43,9 @@ const cells = [
   '%%lineup holdout lineup\nmodels: shallow, deeper\ndata: test\nmetrics: accuracy',
   '%%decide Use the deeper tree\nwhy: Higher holdout accuracy.\nevidence: holdout lineup\ncheck: holdout lineup: deeper accuracy >= 0.8',
   'penguins.slice(0, 3)',
+  '%%fit pruned tree\ndata: train\ntarget: Species\nprune: reduced-error\nprune-on: test',
+  '%%fit stacked stacking\ndata: train\ntarget: Species\nmembers: shallow, deeper\nfolds: 3',
+  '%%lineup all kinds\nmodels: shallow, pruned, stacked\ndata: test',
 ];
 
 function notebook(): object {
@@ -99,6 +102,11 @@ describe.runIf(hasJupyter || mustRun)('jupyter nbconvert --execute with the copp
     expect(outs[6].some((o) => o.output_type === 'display_data')).toBe(true);
     // 8: a table value as the last expression shows as an HTML table with a note.
     expect(joined(outs[7][0].data?.['text/html'])).toContain('3 rows × 7 columns');
+    // 9-10: a tree pruned from the magic's settings, and a stack of two earlier models, through the real kernel's compiler.
+    expect(joined(outs[8].at(-1)?.data?.['text/plain'])).toMatch(/\n {2}pruned +reduced error, on 86 held-out rows\n/);
+    expect(joined(outs[9].at(-1)?.data?.['text/plain'])).toMatch(/^stacked: stack model\n(.*\n)* {2}members +shallow, deeper\n/);
+    // 11: the lineup scores a stack like any other model.
+    expect(joined(outs[10][0].data?.['text/plain'])).toMatch(/\nstacked +0\.\d+/);
   });
 
   it('reports a malformed magic as an error output naming line and word, and stops', () => {

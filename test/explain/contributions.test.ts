@@ -69,6 +69,21 @@ describe('contributionsOf(model, frame): expected + Σ contributions = raw outpu
     expect(Array.from(c.values[0]).every((v) => v === 0)).toBe(true);
   });
 
+  it('a category unseen in training is explained like a missing one (both follow the missing-value child)', () => {
+    const model = fitForest(cls, { size: 5, seed: 8, depthLimit: 5 });
+    const f = cls.features;
+    const v = f.columns[1] as { codes: Int32Array; categories: readonly string[] };
+    const codes = Int32Array.from([v.categories.length, -1]); // 'Gala' (appended), then missing
+    const two = {
+      nRows: 2,
+      columns: f.columns.map((c, j) => (j === 1 ? { ...v, name: 'variety', kind: 'categorical' as const, codes, categories: [...v.categories, 'Gala'] }
+        : c.kind === 'categorical' ? { ...c, codes: Int32Array.from([c.codes[0], c.codes[0]]) } : { ...c, values: Float64Array.from([c.values[0], c.values[0]]) })),
+      schema: f.schema,
+    };
+    const c = contributionsOf(model, two);
+    for (let k = 0; k < 3; k++) expect(Array.from(c.values[k].slice(0, 4))).toEqual(Array.from(c.values[k].slice(4, 8)));
+  });
+
   it('explains only the rows asked for, in order', () => {
     const model = fitTree(num, { depthLimit: 3 });
     const all = contributionsOf(model, num.features);

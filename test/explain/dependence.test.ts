@@ -43,7 +43,7 @@ describe('dependenceOn(model, frame, feature) on Friedman #1 (n = 2,000, seeded)
     expect(fit.r).toBeGreaterThan(0.95);
   });
 
-  it('x7 (irrelevant): nearly flat, range under 1 (the noise sd)', () => {
+  it('x7 (irrelevant): nearly flat, range under 1, the noise sd (bound: common practice)', () => {
     const pd = dependenceOn(model, data.features, 'x7', { curveRows: 0 });
     const avg = pd.points.map((p) => p.average);
     expect(Math.max(...avg) - Math.min(...avg)).toBeLessThan(1);

@@ -94,3 +94,28 @@ describe('modelToOnnx(model) run by onnxruntime-web matches coppice within 1e-5'
     });
   }
 });
+
+describe('modelToOnnx(model): degenerate models still run', () => {
+  it('a constant target: a one-leaf tree', async () => {
+    const flat = { ...frTrain, target: { kind: 'number' as const, name: 'y', values: new Float64Array(frTrain.features.nRows).fill(3.25) } };
+    const { gap } = await compare(fitTree(flat), frTest);
+    expect(gap).toBe(0);
+  });
+
+  it('an ensemble with no trees kept: the output is the base value', async () => {
+    const gb = fitBoosting(frTrain, { rounds: 3, depthLimit: 2 });
+    const none = { ...gb, trees: [], steps: [], roundsKept: 0 };
+    const out = await runOnnx(none, frTest);
+    const got = out.prediction.data as Float32Array;
+    expect(got[0]).toBe(Math.fround(gb.initial[0]));
+  });
+
+  it('a frame of one row and a frame with every value missing', async () => {
+    const model = fitTree(clsTrain, { depthLimit: 4 });
+    const one = takeDataset(cls, [400]).features;
+    expect((await compare(model, one)).gap).toBeLessThan(TOL);
+    const blank = { ...one, columns: one.columns.map((c) => (c.kind === 'categorical' ? { ...c, codes: Int32Array.of(-1) } : { ...c, values: Float64Array.of(NaN) })) };
+    expect((await compare(model, blank)).labelMismatches).toBe(0);
+    expect((await compare(model, blank)).gap).toBeLessThan(TOL);
+  });
+});

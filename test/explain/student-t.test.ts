@@ -1,7 +1,7 @@
 /**
  * Student t quantiles against the printed table: NIST/SEMATECH e-Handbook of Statistical Methods (2012),
  * §1.3.6.7.2 "Critical values of the Student's t distribution", column 0.975 (two-sided 95%), printed to
- * three decimals — compared at 5e-4.
+ * three decimals — compared at 5e-4. The table values are transcribed from memory of that table.
  */
 import { describe, expect, it } from 'vitest';
 import { studentQuantile, studentTwoSided } from '../../src/explain/student-t.js';

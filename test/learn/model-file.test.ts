@@ -45,7 +45,7 @@ describe('modelToJSON / modelFromJSON', () => {
 
   it('modelToJSON(model) writes the documented top-level fields', () => {
     const json = modelToJSON(models.multiway, { created: '2020-01-01T00:00:00.000Z' });
-    expect(Object.keys(json)).toEqual(['format', 'version', 'kind', 'task', 'features', 'target', 'settings', 'seed', 'fingerprint', 'created', 'body']);
+    expect(Object.keys(json)).toEqual(['format', 'version', 'kind', 'task', 'features', 'target', 'settings', 'seed', 'fingerprint', 'ranges', 'created', 'body']);
     expect(json.format).toBe('coppice-model');
     expect(json.version).toBe(1);
     expect((json.settings as Record<string, unknown>).depthLimit).toBe(4);
@@ -106,5 +106,23 @@ describe('saveModel / loadModel', () => {
     writeFileSync(join(dir, 'flip.json'), text.replace('"kind":[', '"kind":[7,'));
     await expect(loadModel(join(dir, 'flip.json'))).rejects.toThrow(/Model file rejected/);
     await expect(loadModel(join(dir, 'nope.json'))).rejects.toThrow(/no such file/);
+  });
+});
+
+describe('model file: training ranges', () => {
+  it('fitted models record [min, max] per numeric feature and the file keeps them', async () => {
+    const { fitTree } = await import('../../src/learn/tree/fit-tree.js');
+    const { modelFromJSON, modelToJSON } = await import('../../src/learn/model-file.js');
+    const features = {
+      nRows: 4,
+      columns: [{ name: 'x', kind: 'numeric' as const, values: Float64Array.from([3, NaN, -1, 8]) }],
+      schema: { columns: [{ name: 'x', kind: 'numeric' as const }], fingerprint: 'f' },
+    };
+    const m = fitTree({ features, target: { kind: 'number', name: 'y', values: Float64Array.from([1, 2, 3, 4]) }, weights: null });
+    expect(m.ranges).toEqual({ x: [-1, 8] });
+    const back = modelFromJSON(JSON.parse(JSON.stringify(modelToJSON(m))));
+    expect(back.ranges).toEqual({ x: [-1, 8] });
+    const bad = { ...modelToJSON(m), ranges: { x: [9, 1] } };
+    expect(() => modelFromJSON(bad)).toThrow(/ranges\.x should be \[min, max\]/);
   });
 });

@@ -120,6 +120,22 @@ describe('modelBundle(model, name)', () => {
     ].join('\n'));
     expect(b['text/html']).toContain('petal&lt;length&gt;');
   });
+
+  it('states the last and the lowest watched loss of a boosting model, and the rounds it keeps', () => {
+    // an early-stopped fit: watched loss lowest after round 2, stopped after round 4 (patience 2)
+    const boosted = {
+      ...model, kind: 'boosting', settings: {}, tree: undefined, trees: [leafTree, leafTree], loss: 'logistic',
+      trainLoss: [0.69, 0.5, 0.4, 0.35, 0.3], watchLoss: [0.69, 0.55, 0.5, 0.52, 0.53], bestRound: 2, roundsKept: 2,
+    };
+    const lines = String(modelBundle(boosted as unknown as TreeModel)['text/plain']).split('\n');
+    expect(lines).toContain('  training loss (logistic)  0.3 after round 4');
+    expect(lines).toContain('  watched loss (logistic)   0.53 after round 4; lowest 0.5 after round 2; model keeps rounds 1–2');
+  });
+
+  it('says how a tree was pruned', () => {
+    const pruned = { ...model, settings: { pruning: { method: 'costComplexity', alpha: 0.0125, rule: 'oneSE', evaluation: 'crossValidation', folds: 10 } } };
+    expect(String(modelBundle(pruned)['text/plain'])).toContain('  pruned         cost complexity, α = 0.0125 (rule oneSE, 10-fold cross-validation)');
+  });
 });
 
 describe('kindOfValue(value)', () => {

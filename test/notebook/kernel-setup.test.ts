@@ -1,3 +1,4 @@
+import { isKernelNotice } from '../../src/notebook/kernel-notices.js';
 import { describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -75,5 +76,15 @@ describe('kernelInfo(ts, version) and errorContent(error)', () => {
     expect(errorContent({ kind: 'runtime', name: 'RangeError', message: 'too far', trace: ['at f (x:1:2)'] }))
       .toEqual({ ename: 'RangeError', evalue: 'too far', traceback: ['RangeError: too far', '    at f (x:1:2)'] });
     expect(errorContent({ kind: 'magic', name: 'CoppiceError', message: 'Magic at line 1', trace: [] }).ename).toBe('Malformed magic');
+  });
+});
+
+describe('isKernelNotice(text)', () => {
+  it("recognises tslab's notice about a message type it does not handle (tslab 1.0.22 dist/jupyter.js), nothing else", () => {
+    expect(isKernelNotice('unknown msg_type: history_request\n')).toBe(true);
+    expect(isKernelNotice('unknown msg_type: usage_request\n')).toBe(true);
+    expect(isKernelNotice('careful: unknown msg_type: history_request\n')).toBe(false);
+    expect(isKernelNotice('unknown msg_type: a\nand more output\n')).toBe(false);
+    expect(isKernelNotice('Unknown column "x" in table.\n')).toBe(false);
   });
 });

@@ -21,6 +21,7 @@ import { impurityImportance } from './importance.js';
 import type { AdaBoostModel, AdaBoostRound } from './models.js';
 import { checkKnown, memberTreeKeys, memberTreeRecord, oneOf, resolveMemberTree, wholeNumber, type MemberTreeOptions } from './options.js';
 import { applyClassWeights, prepareData } from './prepare.js';
+import { callbackOption, type RoundCallback } from './progress.js';
 import { rowSourceOf } from '../tree/row-source.js';
 import { argmaxAt } from './tree-sum.js';
 import { drawWeightedCounts } from './weighted-draw.js';
@@ -42,9 +43,16 @@ export interface AdaBoostOptions extends MemberTreeOptions {
   readonly depthLimit?: number;
   /** __Default:__ 'gini'. */
   readonly criterion?: MemberTreeOptions['criterion'];
+  /**
+   * Called after every kept round (src/learn/ensemble/progress.ts): `trainLoss` and `watchLoss` are the
+   * weighted training and watched errors, `bestRound` the round with the lowest watched error so far.
+   * When a stop rule discards a round, the last report repeats the round before it with `last` set.
+   * Never changes the model. __Default:__ none.
+   */
+  readonly onRound?: RoundCallback;
 }
 
-export const adaBoostKeys = ['rounds', 'sampling', 'seed', 'watch', 'classWeights', ...memberTreeKeys] as const;
+export const adaBoostKeys = ['rounds', 'sampling', 'seed', 'watch', 'classWeights', 'onRound', ...memberTreeKeys] as const;
 
 /**
  * Fit AdaBoost (two-class Algorithm 10.1, or SAMME for more classes).
@@ -59,6 +67,7 @@ export function fitAdaBoost(data: Dataset, options: AdaBoostOptions = {}): AdaBo
   const sampling = oneOf('sampling', options.sampling ?? 'weights', ['weights', 'resample']);
   const seed = wholeNumber('seed', options.seed ?? 0, -(2 ** 31));
   const member = resolveMemberTree(options, { criterion: 'gini', depthLimit: 1, leafRows: 1 });
+  const onRound = callbackOption<RoundCallback>('onRound', options.onRound);
   const prep = prepareData(data, 'fit AdaBoost');
   const target = prep.data.target;
   if (target.kind !== 'class') throw errors.badTarget(target.name, 'AdaBoost needs a class target');
@@ -81,14 +90,24 @@ export function fitAdaBoost(data: Dataset, options: AdaBoostOptions = {}): AdaBo
     let fs = 0;
     for (let i = 0; i < n; i++) fs += fitW[i];
     for (let i = 0; i < n; i++) growW[i] = (fitW[i] * n) / fs;
-    const { tree } = growEnsembleTree({
+    const { tree, leafOfRow } = growEnsembleTree({
       frame: prep.data.features, weights: growW,
       response: { kind: 'class', codes: y, nClasses: K, criterion: member.criterion },
       settings: member.grow, rng: derive(seed, m, 1),
     }, member.engine);
-    for (let i = 0; i < n; i++) { guess[i] = argmaxAt(tree.value, leafOf(tree, src, i) * K, K); miss[i] = guess[i] !== y[i] ? 1 : 0; }
+    // rows the tree was grown on: their leaf from the grower; rows left out (weight 0): routed
+    for (let i = 0; i < n; i++) {
+      const leaf = leafOfRow[i] >= 0 ? leafOfRow[i] : leafOf(tree, src, i);
+      guess[i] = argmaxAt(tree.value, leaf * K, K);
+      miss[i] = guess[i] !== y[i] ? 1 : 0;
+    }
     const err = weightedError(w, miss);
-    if (isNoBetterThanGuessing(err, K)) { stopReason = 'guessing'; break; }
+    if (isNoBetterThanGuessing(err, K)) {
+      stopReason = 'guessing';
+      const prev = log.at(-1);
+      if (onRound && prev) onRound({ round: prev.round, total: rounds, trainLoss: prev.trainError, watchLoss: prev.watchError, bestRound: bestOf(log), last: true });
+      break;
+    }
     const alpha = sammeStepWeight(err, K);
     trees.push(tree);
     stepWeights.push(alpha);
@@ -98,7 +117,9 @@ export function fitAdaBoost(data: Dataset, options: AdaBoostOptions = {}): AdaBo
       for (let i = 0; i < watch.n; i++) watchVotes[i * K + argmaxAt(tree.value, leafOf(tree, watch.src, i) * K, K)] += alpha;
       watchError = voteError(watchVotes, watch.y, watch.weights, K);
     }
-    log.push({ round: m + 1, weightedError: err, stepWeight: alpha, trainError: voteError(votes, y, sw, K), watchError });
+    const entry: AdaBoostRound = { round: m + 1, weightedError: err, stepWeight: alpha, trainError: voteError(votes, y, sw, K), watchError };
+    log.push(entry);
+    onRound?.({ round: m + 1, total: rounds, trainLoss: entry.trainError, watchLoss: watchError, bestRound: bestOf(log), last: err <= 0 || m + 1 === rounds });
     if (err <= 0) { stopReason = 'perfect'; break; }
     updateRowWeights(w, miss, alpha);
   }
@@ -109,6 +130,13 @@ export function fitAdaBoost(data: Dataset, options: AdaBoostOptions = {}): AdaBo
     kind: 'adaboost', trees, stepWeights, rounds: log, stopReason, prior,
     importance: impurityImportance(trees, prep.data.features.schema.columns),
   };
+}
+
+/** Round with the lowest watched error so far (the earliest on ties), or the latest round without a watched set. */
+function bestOf(log: readonly AdaBoostRound[]): number {
+  let best = log.length, low = Infinity;
+  for (const r of log) if (r.watchError < low) { low = r.watchError; best = r.round; }
+  return best;
 }
 
 /** Weighted share of rows whose top-voted class is wrong. */

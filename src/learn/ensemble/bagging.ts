@@ -5,6 +5,7 @@
 import type { Dataset } from '../../table/frame.js';
 import { fitBaggedTrees } from './bagged-trees.js';
 import type { ForestModel } from './models.js';
+import { callbackOption, type TreeCallback } from './progress.js';
 import { checkKnown, memberTreeKeys, oneOf, resolveMemberTree, wholeNumber, type MemberTreeOptions } from './options.js';
 
 export interface BaggingOptions extends MemberTreeOptions {
@@ -22,9 +23,20 @@ export interface BaggingOptions extends MemberTreeOptions {
   readonly depthLimit?: number;
   /** __Default:__ 1. */
   readonly leafRows?: number;
+  /**
+   * Threads growing trees (the calling thread counts as one); the model is the same for any number.
+   * Needs the package built (dist/); otherwise every tree grows in the calling thread.
+   * __Default:__ 1 when rows × trees < 2,000,000, else min(2, cores).
+   */
+  readonly workers?: number;
+  /**
+   * Called as trees are added, in order, with the count so far and the out-of-bag error
+   * (src/learn/ensemble/progress.ts). Never changes the model. __Default:__ none.
+   */
+  readonly onTree?: TreeCallback;
 }
 
-export const baggingKeys = ['size', 'combine', 'seed', 'classWeights', ...memberTreeKeys] as const;
+export const baggingKeys = ['size', 'combine', 'seed', 'classWeights', 'workers', 'onTree', ...memberTreeKeys] as const;
 
 /**
  * Fit bagged trees.
@@ -41,5 +53,7 @@ export function fitBagging(data: Dataset, options: BaggingOptions = {}): ForestM
     combine: oneOf('combine', options.combine ?? 'average', ['average', 'vote']),
     plan: { tree, featuresPerSplit: 0 },
     classWeights: options.classWeights,
+    workers: options.workers,
+    onTree: callbackOption<TreeCallback>('onTree', options.onTree),
   });
 }

@@ -4,6 +4,7 @@
 import type { Dataset, Target } from '../../table/frame.js';
 import { errors } from '../../errors.js';
 import type { LossName } from './loss/loss.js';
+import { callbackOption, type RoundCallback } from './progress.js';
 import { defaultLossName, lossNames } from './loss/pick.js';
 import {
   checkKnown, memberTreeKeys, numberIn, oneOf, resolveMemberTree, wholeNumber, type MemberTree, type MemberTreeOptions,
@@ -41,12 +42,28 @@ export interface BoostingOptions extends MemberTreeOptions {
   readonly classWeights?: Readonly<Record<string, number>>;
   /** Depth of each tree. __Default:__ 3 (common practice: small trees). */
   readonly depthLimit?: number;
+  /**
+   * Grow each tree as a Newton fit — to −gradient/hessian with weights × hessian, so splits maximise the
+   * second-order gain — instead of a least-squares fit to the pseudo-residuals (src/learn/ensemble/
+   * newton-response.ts; Friedman, Hastie & Tibshirani 2000). Leaf values are the same Newton steps either
+   * way. For 'logistic', 'multiclass' and 'poisson'; with 'squared' it changes nothing (the hessian is 1);
+   * the other losses have no usable second derivative and reject it. __Default:__ false.
+   */
+  readonly newtonTrees?: boolean;
+  /**
+   * Called after every round with its number, the training and watched losses and the best round so far
+   * (src/learn/ensemble/progress.ts). Never changes the model. __Default:__ none.
+   */
+  readonly onRound?: RoundCallback;
 }
 
 export const boostingKeys = [
   'loss', 'rounds', 'learningRate', 'stepDecay', 'rowFraction', 'seed', 'watch', 'patience', 'huberQuantile',
-  'quantileLevel', 'classWeights', ...memberTreeKeys,
+  'quantileLevel', 'classWeights', 'newtonTrees', 'onRound', ...memberTreeKeys,
 ] as const;
+
+/** Losses whose leaf rule is a Newton step with a non-constant hessian (where `newtonTrees` matters). */
+const newtonLosses: readonly LossName[] = ['logistic', 'multiclass', 'poisson', 'squared'];
 
 export interface BoostingSettings {
   readonly loss: LossName;
@@ -58,7 +75,9 @@ export interface BoostingSettings {
   readonly patience: number;
   readonly huberQuantile: number;
   readonly quantileLevel: number;
+  readonly newtonTrees: boolean;
   readonly tree: MemberTree;
+  readonly onRound: RoundCallback | null;
 }
 
 /**
@@ -70,8 +89,14 @@ export function resolveBoostingOptions(o: BoostingOptions, target: Target): Boos
   checkKnown(o, boostingKeys);
   const patience = wholeNumber('patience', o.patience ?? Infinity, 1, true);
   if (patience !== Infinity && !o.watch) throw errors.badOption('patience', patience, 'a watched set (option watch) to stop on');
+  const loss = oneOf('loss', o.loss ?? defaultLossName(target), lossNames);
+  const newtonTrees = o.newtonTrees ?? false;
+  if (typeof newtonTrees !== 'boolean') throw errors.badOption('newtonTrees', newtonTrees, 'true or false');
+  if (newtonTrees && !newtonLosses.includes(loss)) {
+    throw errors.badOption('newtonTrees', true, `a loss with a second derivative (${newtonLosses.map((l) => `'${l}'`).join(', ')}), not '${loss}'`);
+  }
   return {
-    loss: oneOf('loss', o.loss ?? defaultLossName(target), lossNames),
+    loss,
     rounds: wholeNumber('rounds', o.rounds ?? 100, 0),
     learningRate: numberIn('learningRate', o.learningRate ?? 0.1, 0, 1, true),
     stepDecay: numberIn('stepDecay', o.stepDecay ?? 0, 0, Number.MAX_VALUE),
@@ -80,6 +105,8 @@ export function resolveBoostingOptions(o: BoostingOptions, target: Target): Boos
     patience,
     huberQuantile: numberIn('huberQuantile', o.huberQuantile ?? 0.9, 0, 1, true),
     quantileLevel: numberIn('quantileLevel', o.quantileLevel ?? 0.5, 0, 1, true),
+    newtonTrees,
+    onRound: callbackOption<RoundCallback>('onRound', o.onRound),
     tree: resolveMemberTree(o, { criterion: 'gini', depthLimit: 3, leafRows: 1 }),
   };
 }

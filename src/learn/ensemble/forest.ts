@@ -5,6 +5,7 @@
 import type { Dataset } from '../../table/frame.js';
 import { fitBaggedTrees } from './bagged-trees.js';
 import type { ForestModel } from './models.js';
+import { callbackOption, type TreeCallback } from './progress.js';
 import { checkKnown, memberTreeKeys, oneOf, resolveMemberTree, wholeNumber, type MemberTreeOptions } from './options.js';
 
 export interface ForestOptions extends MemberTreeOptions {
@@ -27,9 +28,20 @@ export interface ForestOptions extends MemberTreeOptions {
   readonly depthLimit?: number;
   /** __Default:__ 1 for classes, 5 for numbers (common practice). */
   readonly leafRows?: number;
+  /**
+   * Threads growing trees (the calling thread counts as one); the model is the same for any number.
+   * Needs the package built (dist/); otherwise every tree grows in the calling thread.
+   * __Default:__ 1 when rows × trees < 2,000,000, else min(2, cores).
+   */
+  readonly workers?: number;
+  /**
+   * Called as trees are added, in order, with the count so far and the out-of-bag error
+   * (src/learn/ensemble/progress.ts). Never changes the model. __Default:__ none.
+   */
+  readonly onTree?: TreeCallback;
 }
 
-export const forestKeys = ['size', 'featuresPerSplit', 'combine', 'seed', 'classWeights', ...memberTreeKeys] as const;
+export const forestKeys = ['size', 'featuresPerSplit', 'combine', 'seed', 'classWeights', 'workers', 'onTree', ...memberTreeKeys] as const;
 
 /** The default features per split for p features (see `ForestOptions.featuresPerSplit`). */
 export function defaultFeaturesPerSplit(p: number, target: 'class' | 'number'): number {
@@ -55,5 +67,7 @@ export function fitForest(data: Dataset, options: ForestOptions = {}): ForestMod
     combine: oneOf('combine', options.combine ?? 'average', ['average', 'vote']),
     plan: { tree, featuresPerSplit: Math.min(fps, Math.max(1, p)) },
     classWeights: options.classWeights,
+    workers: options.workers,
+    onTree: callbackOption<TreeCallback>('onTree', options.onTree),
   });
 }

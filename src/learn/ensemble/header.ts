@@ -3,6 +3,7 @@
  * fingerprints of the training data.
  */
 import { dataFingerprint } from '../../table/fingerprint.js';
+import { featureRangesOf } from '../../table/ranges.js';
 import type { Dataset } from '../../table/frame.js';
 import type { ModelHeader, ModelKind } from '../model.js';
 
@@ -19,6 +20,7 @@ export function ensembleHeader(kind: ModelKind, data: Dataset, settings: Record<
     features: data.features.schema.columns,
     target: t.kind === 'class' ? { name: t.name, kind: 'class', classes: t.classes } : { name: t.name, kind: 'number' },
     settings,
+    ranges: featureRangesOf(data.features),
     seed,
     fingerprint: { schema: data.features.schema.fingerprint, data: dataFingerprint(data) },
   };

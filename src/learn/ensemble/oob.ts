@@ -50,6 +50,23 @@ export class OobTally {
     return this.record();
   }
 
+  /**
+   * Add member `tree` given the leaf each out-of-bag row reaches (`oobLeaf[i]`, −1 for in-bag rows), and
+   * record the error so far; the same sums as `addTree` when `oobLeaf` was routed from the same counts.
+   */
+  addLeaves(tree: FlatTree, oobLeaf: Int32Array): number {
+    const K = this.K, v = tree.value;
+    for (let i = 0; i < this.n; i++) {
+      const leaf = oobLeaf[i];
+      if (leaf < 0 || !(this.w[i] > 0)) continue;
+      if (K === 0) this.sums[i] += v[leaf];
+      else if (this.vote) this.sums[i * K + argmaxAt(v, leaf * K, K)] += 1;
+      else for (let k = 0; k < K; k++) this.sums[i * K + k] += v[leaf * K + k];
+      this.hits[i]++;
+    }
+    return this.record();
+  }
+
   /** Add one member's out-of-bag predictions given directly (generic bagging): `pred[i]` is a class code or value. */
   addPredictions(pred: Float64Array, proba: Float64Array | null, counts: Float64Array): number {
     const K = this.K;

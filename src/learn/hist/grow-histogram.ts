@@ -16,6 +16,7 @@
  */
 import { engine } from '../../kernels/engine.js';
 import { BINS, MISSING } from '../../kernels/layout.js';
+import { viewsOf } from '../../kernels/views.js';
 import { NUMERIC, SUBSET } from '../flat-tree.js';
 import type { GrowResult, GrowTask } from '../grow-task.js';
 import { ENTROPY, GINI, VARIANCE, weightedImpurity, type ImpurityCode } from '../tree/impurity.js';
@@ -203,7 +204,7 @@ function openNode(run: Run, start: number, count: number, depth: number, stats: 
 /** Write the split's threshold or category set into the node record (children filled in by expand). */
 function recordSplit(run: Run, id: number, s: FinishedHistSplit, hist: number): void {
   const feat = run.ws.binned.features[s.feature];
-  const f64 = new Float64Array(run.ws.engine.arena.buffer);
+  const f64 = viewsOf(run.ws.engine.arena.buffer).f64;
   const h = (hist >> 3) + s.feature * BINS * run.ws.stride;
   const seen = (b: number): boolean => f64[h + b * run.ws.stride] > 0;
   let threshold = 0, inLeft: Uint8Array | null = null;

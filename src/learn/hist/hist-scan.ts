@@ -11,6 +11,7 @@
  *   (Fisher 1958; Breiman, Friedman, Olshen & Stone 1984, §4.2.2 and §8.8). Ties in order: lower bin.
  */
 import { BINS, MISSING } from '../../kernels/layout.js';
+import { viewsOf } from '../../kernels/views.js';
 import { NUMERIC, SUBSET } from '../flat-tree.js';
 import { ENTROPY, GINI, channelWeight, weightedImpurity, type ImpurityCode } from '../tree/impurity.js';
 import type { HistWorkspace } from './hist-workspace.js';
@@ -65,15 +66,14 @@ function scanNumericValue(s: ScanNode, f: number, nBins: number): HistChoice | n
   const { arena, kernels } = s.ws.engine;
   const block = s.histPtr + f * BINS * s.ws.stride * 8;
   kernels.scanValue(block, nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
-  const o = arena.f64(s.ws.scanPtr, 8);
-  if (o[1] < 0) return null;
-  const f64 = new Float64Array(arena.buffer);
-  const m = missingOf(s, f64, block >> 3);
+  const o = viewsOf(arena.buffer).f64, q = s.ws.scanPtr >> 3;
+  if (o[q + 1] < 0) return null;
+  const m = missingOf(s, o, block >> 3);
   return {
-    feature: f, kind: NUMERIC, bin: o[1], leftBins: null,
-    slotStats: Float64Array.of(o[3], o[4], o[6] - o[3], o[7] - o[4]),
-    slotRows: Float64Array.of(o[2], o[5] - o[2]),
-    missingStats: m.stats, missingRows: m.rows, score: o[0],
+    feature: f, kind: NUMERIC, bin: o[q + 1], leftBins: null,
+    slotStats: Float64Array.of(o[q + 3], o[q + 4], o[q + 6] - o[q + 3], o[q + 7] - o[q + 4]),
+    slotRows: Float64Array.of(o[q + 2], o[q + 5] - o[q + 2]),
+    missingStats: m.stats, missingRows: m.rows, score: o[q],
   };
 }
 
@@ -135,7 +135,7 @@ function seenBins(s: ScanNode, f64: Float64Array, h: number, nBins: number): num
 export function scanFeature(s: ScanNode, f: number): HistChoice | null {
   const feat = s.ws.binned.features[f];
   if (feat.kind === 'numeric' && s.ws.nClasses === 0) return scanNumericValue(s, f, feat.nBins);
-  const f64 = new Float64Array(s.ws.engine.arena.buffer);
+  const f64 = viewsOf(s.ws.engine.arena.buffer).f64;
   const h = blockStart(s, f);
   const seen = seenBins(s, f64, h, feat.nBins);
   if (feat.kind === 'numeric') {

@@ -6,7 +6,11 @@
 import { LEAF, MULTIWAY, SUBSET, type FlatTree } from '../flat-tree.js';
 import { TreeBuilder } from '../tree/tree-builder.js';
 
-/** Distinct children of node `n` (none for a leaf), in ascending index order. */
+/**
+ * Distinct children of node `n` (none for a leaf), in ascending index order.
+ * @example
+ * childrenOf(tree, 0); // e.g. [1, 2]
+ */
 export function childrenOf(tree: FlatTree, n: number): number[] {
   switch (tree.kind[n]) {
     case LEAF:
@@ -28,14 +32,22 @@ export function depthsOf(tree: FlatTree): Int32Array {
   return d;
 }
 
-/** Number of leaves. */
+/**
+ * Number of leaves.
+ * @example
+ * leafCount(model.tree); // e.g. 7
+ */
 export function leafCount(tree: FlatTree): number {
   let k = 0;
   for (let n = 0; n < tree.nNodes; n++) if (tree.kind[n] === LEAF) k++;
   return k;
 }
 
-/** A copy of `tree` where every node with `collapse[n]` set is a leaf (descendants removed). */
+/**
+ * A copy of `tree` where every node with `collapse[n]` set is a leaf (descendants removed).
+ * @example
+ * const stump = collapseTree(tree, Array.from({ length: tree.nNodes }, (_, n) => n > 0));
+ */
 export function collapseTree(tree: FlatTree, collapse: ArrayLike<number | boolean>): FlatTree {
   const keep = new Uint8Array(tree.nNodes);
   const isLeaf = new Uint8Array(tree.nNodes);

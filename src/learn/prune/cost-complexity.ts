@@ -54,7 +54,11 @@ export interface CostComplexityResult {
   readonly rule: 'oneSE' | 'minimum';
 }
 
-/** `model` pruned to the subtree of its sequence in force at `alpha`. */
+/**
+ * `model` pruned to the subtree of its sequence in force at `alpha`.
+ * @example
+ * const small = pruneAtAlpha(model, costComplexityPath(model, train), 0.01);
+ */
 export function pruneAtAlpha(model: TreeModel, path: ComplexityPath, alpha: number): TreeModel {
   const collapse = Array.from(path.collapseAt, (a) => a <= alpha);
   return { ...model, tree: collapseTree(model.tree, collapse) };

@@ -42,7 +42,11 @@ export function checkTarget(model: TreeModel, data: Dataset): void {
   }
 }
 
-/** Route every row of `data` through `model.tree` and sum losses per node. */
+/**
+ * Route every row of `data` through `model.tree` and sum losses per node.
+ * @example
+ * const { rows, asLeaf } = nodeLosses(model, validation);
+ */
 export function nodeLosses(model: TreeModel, data: Dataset, tree = model.tree): NodeLosses {
   checkTarget(model, data);
   const src = rowSourceFor(model.features, data.features);

@@ -3,6 +3,7 @@
  */
 import type { ColumnSchema, Dataset, Frame } from '../../table/frame.js';
 import { dataFingerprint, schemaFingerprint } from '../../table/fingerprint.js';
+import { featureRangesOf } from '../../table/ranges.js';
 import { createRng } from '../../util/rng.js';
 import type { Response } from '../grow-task.js';
 import { growTree } from '../grow.js';
@@ -10,7 +11,11 @@ import type { TreeModel } from '../tree-model.js';
 import { growSettingsOf, resolveTreeOptions, type TreeOptions } from './tree-options.js';
 import { trainingRowsOf } from './training-rows.js';
 
-/** The schema of a frame's columns, in order (what a model records as its features). */
+/**
+ * The schema of a frame's columns, in order (what a model records as its features).
+ * @example
+ * featureSchemaOf(frame); // [{ name: 'age', kind: 'numeric' }, ...]
+ */
 export function featureSchemaOf(frame: Frame): ColumnSchema[] {
   return frame.columns.map((c) => {
     const s: { name: string; kind: ColumnSchema['kind']; categories?: readonly string[]; origin?: ColumnSchema['origin'] } = { name: c.name, kind: c.kind };
@@ -51,6 +56,7 @@ export function fitTree(data: Dataset, options: TreeOptions = {}): TreeModel {
       ? { name: target.name, kind: 'class', classes: target.classes.slice() }
       : { name: target.name, kind: 'number' },
     settings: { ...settings },
+    ranges: featureRangesOf(data.features),
     seed: settings.seed,
     fingerprint: { schema: schemaFingerprint(features), data: dataFingerprint(data) },
     tree,

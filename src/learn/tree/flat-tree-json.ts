@@ -11,7 +11,11 @@ import { encodeFloats, readFloats, readInt, readInts, readObject } from './json-
 
 const I32_MAX = 2147483647;
 
-/** Plain-JSON form of a tree (typed arrays as arrays; non-finite numbers tagged). */
+/**
+ * Plain-JSON form of a tree (typed arrays as arrays; non-finite numbers tagged).
+ * @example
+ * const body = { trees: forest.trees.map(encodeFlatTree) };
+ */
 export function encodeFlatTree(t: FlatTree): { [key: string]: JsonValue } {
   return {
     nNodes: t.nNodes, nOutputs: t.nOutputs,
@@ -26,6 +30,8 @@ export function encodeFlatTree(t: FlatTree): { [key: string]: JsonValue } {
 /**
  * Read and check a tree written by `encodeFlatTree`. `features` is the model's feature schema: every
  * split must name a feature of the right kind.
+ * @example
+ * const tree = decodeFlatTree(body.tree, 'body.tree', header.features);
  */
 export function decodeFlatTree(v: unknown, path: string, features: readonly ColumnSchema[]): FlatTree {
   const o = readObject(v, path);

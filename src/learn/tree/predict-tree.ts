@@ -23,7 +23,11 @@ export function predictTree(tree: FlatTree, frame: Frame | RowSource, nRows?: nu
   return out;
 }
 
-/** Index of the leaf each row reaches. */
+/**
+ * Index of the leaf each row reaches.
+ * @example
+ * const leaves = leavesOf(model.tree, rowSourceOf(frame), frame.nRows);
+ */
 export function leavesOf(tree: FlatTree, src: RowSource, nRows: number): Int32Array {
   const out = new Int32Array(nRows);
   for (let i = 0; i < nRows; i++) out[i] = leafOf(tree, src, i);

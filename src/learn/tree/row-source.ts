@@ -5,7 +5,11 @@ import { errors } from '../../errors.js';
 import type { ColumnSchema, Frame } from '../../table/frame.js';
 import type { RowSource } from '../flat-tree.js';
 
-/** Accessors for every column of `frame`, without checks (tree `feature` indices = column indices). */
+/**
+ * Accessors for every column of `frame`, without checks (tree `feature` indices = column indices).
+ * @example
+ * const leaf = leafOf(tree, rowSourceOf(frame), 0);
+ */
 export function rowSourceOf(frame: Frame): RowSource {
   return {
     numeric: frame.columns.map((c) => (c.kind === 'categorical' ? null : c.values)),

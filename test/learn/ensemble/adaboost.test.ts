@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { fitAdaBoost } from '../../../src/learn/ensemble/adaboost.js';
 import { predictAdaBoost } from '../../../src/learn/ensemble/predict-adaboost.js';
 import { takeDataset } from '../../../src/table/dataset.js';
+import type { RoundInfo } from '../../../src/learn/ensemble/progress.js';
 import { classTarget, datasetOf, foldsOf, frameOf, numberTarget, penguins } from './fixtures.js';
 
 describe('fitAdaBoost(data, options)', () => {
@@ -83,5 +84,40 @@ describe('degenerate inputs: fitAdaBoost', () => {
     const f = frameOf({ x: [1, NaN, 3, 4, 5, 6] });
     const m = fitAdaBoost(datasetOf(f, classTarget('y', ['a', 'a', null, 'b', 'b', 'b'])), { rounds: 3 });
     expect(predictAdaBoost(m, f).value.every((v) => v === 0 || v === 1)).toBe(true);
+  });
+});
+
+describe('fitAdaBoost(data, { onRound })', () => {
+  it('reports each kept round with its training and watched error and the best round so far; the model is unchanged', () => {
+    const data = penguins();
+    const n = data.features.nRows;
+    const idx = Array.from({ length: n }, (_, i) => i);
+    const train = takeDataset(data, idx.filter((i) => i % 3 !== 0)), hold = takeDataset(data, idx.filter((i) => i % 3 === 0));
+    const o = { rounds: 15, watch: hold, sampling: 'resample' as const, seed: 5, depthLimit: 2 };
+    const seen: RoundInfo[] = [];
+    const m = fitAdaBoost(train, { ...o, onRound: (info) => seen.push(info) });
+    expect(JSON.stringify(m)).toBe(JSON.stringify(fitAdaBoost(train, o)));
+    expect(seen.length).toBe(m.rounds.length);
+    seen.forEach((info, j) => {
+      const upTo = m.rounds.slice(0, j + 1).map((r) => r.watchError);
+      expect([info.round, info.total, info.trainLoss, info.watchLoss]).toEqual([j + 1, 15, m.rounds[j].trainError, m.rounds[j].watchError]);
+      expect(info.bestRound).toBe(upTo.indexOf(Math.min(...upTo)) + 1);
+      expect(info.last).toBe(j === seen.length - 1);
+    });
+  });
+  it('a perfect first round is the last report; a discarded round repeats the one before with last set; none when no round is kept', () => {
+    const seen: RoundInfo[] = [];
+    fitAdaBoost(datasetOf(frameOf({ x: [1] }), classTarget('y', ['b'], ['a', 'b'])), { onRound: (i) => seen.push(i) });
+    expect(seen.map((i) => [i.round, i.last, Number.isNaN(i.watchLoss)])).toEqual([[1, true, true]]);
+    // x = 1 1 1 2 2 2, y = a b b a b a. Round 1: the stump votes b | a and misses rows 1 and 5 → err = 1/3,
+    // α = log 2, w ∝ 2 1 1 1 2 1. Round 2: each side weighs a and b equally (2 : 2), both leaves say a
+    // (ties: lowest code) → err = 1/2: no better than guessing, discarded; the last report repeats round 1.
+    const again: RoundInfo[] = [];
+    const m = fitAdaBoost(datasetOf(frameOf({ x: [1, 1, 1, 2, 2, 2] }), classTarget('y', ['a', 'b', 'b', 'a', 'b', 'a'])), { rounds: 10, onRound: (i) => again.push(i) });
+    expect(m.stopReason).toBe('guessing');
+    expect(again.map((i) => [i.round, i.trainLoss, i.last])).toEqual([[1, expect.closeTo(1 / 3, 12), false], [1, expect.closeTo(1 / 3, 12), true]]);
+    const none: RoundInfo[] = [];
+    fitAdaBoost(datasetOf(frameOf({ z: [null, null, null, null] }), classTarget('y', ['a', 'b', 'a', 'b'])), { onRound: (i) => none.push(i) });
+    expect(none).toEqual([]);
   });
 });

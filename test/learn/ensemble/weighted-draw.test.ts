@@ -30,6 +30,12 @@ describe('drawSubsampleMask(n, fraction, rng)', () => {
     // binomial sd of a share 0.3 over 20,000 draws ≈ 0.0032; 4 sd bound
     for (const h of hits) expect(Math.abs(h / 20_000 - 0.3)).toBeLessThan(0.013);
   });
+  it('drawSubsampleMask(n, fraction, rng, out) overwrites a reused buffer with the same draw', () => {
+    const out = new Uint8Array(50).fill(1);
+    expect(drawSubsampleMask(50, 0.3, createRng(4), out)).toBe(out);
+    expect(Array.from(out)).toEqual(Array.from(drawSubsampleMask(50, 0.3, createRng(4))));
+    expect(() => drawSubsampleMask(50, 0.3, createRng(4), new Uint8Array(3))).toThrow(/out/);
+  });
   it('rejects a fraction outside (0, 1]', () => {
     expect(() => drawSubsampleMask(5, 0, createRng(1))).toThrow(/rowFraction/);
     expect(() => drawSubsampleMask(5, 1.5, createRng(1))).toThrow(/rowFraction/);

@@ -13,7 +13,7 @@ import { createRng } from '../../../src/util/rng.js';
 import { takeDataset } from '../../../src/table/dataset.js';
 import type { Dataset } from '../../../src/table/frame.js';
 import type { ClassCriterion } from '../../../src/learn/grow-task.js';
-import { playTennisData } from './fixtures.js';
+import { classTarget, datasetOf, playTennisData } from './fixtures.js';
 
 const TOL = 1e-6; // CHECKS.md: exact recomputed values compared at 1e-6
 
@@ -103,5 +103,19 @@ describe('PlayTennis (Mitchell 1997, Table 3.2)', () => {
     expect(describeTree(model.tree, data)).toBe(
       'Outlook(overcast->yes, rain->Wind(strong->no, weak->yes), sunny->Humidity(high->no, normal->yes))',
     );
+  });
+});
+
+describe('candidateSplits(task) with missing values (Quinlan 1993, C4.5, ch. 3: unknown attribute values)', () => {
+  it('scales the gain by the known fraction and counts unknowns as a branch of the split information', () => {
+    // g = a a b ?, class 0 0 1 1. Known rows {a: 0 0, b: 1}: H(2/3, 1/3) = 0.918296 bits, both branches pure.
+    // gain = F · 0.918296 with F = 3/4 → 0.688722; split info = H(2/4, 1/4, 1/4) = 1.5; ratio = 0.459148.
+    const data = datasetOf({ g: ['a', 'a', 'b', null] }, classTarget('y', ['n', 'n', 'y', 'y']));
+    const [c] = candidateSplits(taskOf(data, 'gainRatio'));
+    const h = entropyBits([2, 1]);
+    expect(h).toBeCloseTo(0.918296, 6);
+    expect(c.gain).toBeCloseTo(0.75 * h, 12);
+    expect(c.splitInfo).toBeCloseTo(1.5, 12);
+    expect(c.gainRatio).toBeCloseTo((0.75 * h) / 1.5, 12);
   });
 });

@@ -65,6 +65,16 @@ describe('tree properties (CHECKS.md, common practice)', () => {
     expect(stripVolatile(modelToJSON(fitTree(takeDataset(iris, order))))).toEqual(stripVolatile(modelToJSON(fitTree(iris))));
   });
 
+  it('fitTree(shuffled rows) gives the same regression tree (penguin body mass; gains to rounding)', () => {
+    const base = regressionOf(penguins, 4);
+    const order = shuffleInPlace(createRng(9), Array.from({ length: base.features.nRows }, (_, i) => i));
+    const a = fitTree(base).tree, b = fitTree(takeDataset(base, order)).tree;
+    const { gain: ga, ...ra } = a;
+    const { gain: gb, ...rb } = b;
+    expect(rb).toEqual(ra);
+    for (let n = 0; n < a.nNodes; n++) expect(Math.abs(gb[n] - ga[n])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(ga[n])));
+  });
+
   it('scaling a regression target by c scales squared-error tree predictions by c', () => {
     const base = regressionOf(penguins, 4);
     for (const c of [0.001, 3, 1024]) {

@@ -28,15 +28,36 @@ export function logisticLoss(): RatioLoss {
     },
     value(y, F, w) {
       // log(1 + e^F) − yF, computed stably
-      return weightedMean(y.length, w, (i) => {
+      let s = 0, sw = 0;
+      for (let i = 0; i < y.length; i++) {
+        const wi = w[i];
+        if (!(wi > 0)) continue;
         const f = F[i];
-        return (f > 0 ? f + Math.log1p(Math.exp(-f)) : Math.log1p(Math.exp(f))) - y[i] * f;
-      });
+        s += wi * ((f > 0 ? f + Math.log1p(Math.exp(-f)) : Math.log1p(Math.exp(f))) - y[i] * f);
+        sw += wi;
+      }
+      return sw > 0 ? s / sw : 0;
     },
     startRound() {},
     residuals(y, F, _k, out) { for (let i = 0; i < y.length; i++) out[i] = y[i] - sigmoid(F[i]); },
     leafTerms(y, F, _k, r, num, den) {
       for (let i = 0; i < y.length; i++) { const p = y[i] - r[i]; num[i] = r[i]; den[i] = p * (1 - p); }
+    },
+    fusedTerms(y, F, w, r, den) {
+      // one exponential per row: e = e^−|F| gives both log(1 + e^F) and the logistic function
+      let s = 0, sw = 0;
+      for (let i = 0; i < y.length; i++) {
+        const f = F[i], yi = y[i], e = Math.exp(f > 0 ? -f : f);
+        const ri = yi - (f >= 0 ? 1 / (1 + e) : e / (1 + e));
+        r[i] = ri;
+        const p = yi - ri;
+        den[i] = p * (1 - p);
+        const wi = w[i];
+        if (!(wi > 0)) continue;
+        s += wi * ((f > 0 ? f + Math.log1p(e) : Math.log1p(e)) - yi * f);
+        sw += wi;
+      }
+      return sw > 0 ? s / sw : 0;
     },
   };
 }

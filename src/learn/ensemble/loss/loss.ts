@@ -33,6 +33,12 @@ export interface RatioLoss extends LossBase {
   readonly ratioScale: number;
   /** Per-row numerator and denominator for output k, given this round's residuals r. */
   leafTerms(y: Float64Array, F: Float64Array, k: number, r: Float64Array, num: Float64Array, den: Float64Array): void;
+  /**
+   * Optional fused pass for single-output losses (the round loop's hot path): writes the pseudo-residuals
+   * to `r` and the leaf denominators to `den` — exactly what `residuals` then `leafTerms` give (the
+   * numerator is r itself) — and returns `value(y, F, w)`, bit for bit, sharing the exponentials.
+   */
+  fusedTerms?(y: Float64Array, F: Float64Array, w: Float64Array, r: Float64Array, den: Float64Array): number;
 }
 
 export interface GroupLoss extends LossBase {

@@ -40,14 +40,19 @@ export function multiclassLoss(K: number): RatioLoss {
       return Float64Array.from(logs, (v) => v - mean);
     },
     value(y, F, w) {
-      return weightedMean(y.length, w, (i) => {
+      let total = 0, sw = 0;
+      for (let i = 0; i < y.length; i++) {
+        const wi = w[i];
+        if (!(wi > 0)) continue;
         const o = i * K;
         let mx = -Infinity;
         for (let k = 0; k < K; k++) if (F[o + k] > mx) mx = F[o + k];
         let s = 0;
         for (let k = 0; k < K; k++) s += Math.exp(F[o + k] - mx);
-        return mx + Math.log(s) - F[o + y[i]];
-      });
+        total += wi * (mx + Math.log(s) - F[o + y[i]]);
+        sw += wi;
+      }
+      return sw > 0 ? total / sw : 0;
     },
     startRound(y, F) {
       if (p.length !== F.length) p = new Float64Array(F.length);

@@ -128,3 +128,27 @@ describe('pickLoss(name, target)', () => {
     expect(pickLoss('multiclass', three).nOutputs).toBe(3);
   });
 });
+
+describe('fusedTerms(y, F, w, r, den): one pass, the same numbers as residuals + leafTerms + value', () => {
+  // extreme scores (±40) and zero weights included; equality is exact (same arithmetic, shared exponentials)
+  const F = f64(-40, -3, -0.5, 0, 0.25, 2, 40, 1);
+  const w = f64(1, 0, 2, 1, 0.5, 3, 1, 1);
+  const cases = [
+    ['squaredLoss()', squaredLoss(), f64(3, -1, 2, 0.5, 0, 7, -2, 1)],
+    ['logisticLoss()', logisticLoss(), f64(1, 0, 1, 1, 0, 0, 0, 1)],
+    ['poissonLoss()', poissonLoss(), f64(0, 2, 5, 1, 0, 9, 3, 0)],
+  ] as const;
+  for (const [name, loss, y] of cases) {
+    it(`${name}`, () => {
+      const n = y.length, r1 = new Float64Array(n), num = new Float64Array(n), den1 = new Float64Array(n);
+      const Fi = name === 'poissonLoss()' ? F.map((v) => v / 10) : F;
+      loss.residuals(y, Fi, 0, r1);
+      loss.leafTerms(y, Fi, 0, r1, num, den1);
+      const r2 = new Float64Array(n), den2 = new Float64Array(n);
+      const v = loss.fusedTerms?.(y, Fi, w, r2, den2);
+      expect(Array.from(r2)).toEqual(Array.from(r1));
+      expect(Array.from(den2)).toEqual(Array.from(den1));
+      expect(v).toBe(loss.value(y, Fi, w));
+    });
+  }
+});
