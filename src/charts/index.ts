@@ -55,3 +55,8 @@ export { chartTree } from './tree-chart.js';
 export type { TreeChartInput, TreeChartOptions } from './tree-chart.js';
 export { layoutTidyTree } from './tree-layout.js';
 export type { TreeLayout } from './tree-layout.js';
+export { chartSearch, chartBiasVarianceResult } from './from-results.js';
+export { chartBoostingCurve, learningCurveRows } from './boosting-curve.js';
+export { chartOutOfBag, outOfBagRows } from './forest-oob.js';
+export type { ForestCurves } from './forest-oob.js';
+export { confusionFromRows } from './confusion.js';

@@ -11,7 +11,7 @@ import { ROLE, SERIES_COLOURS } from './theme.js';
 
 /** One point of a learning curve. */
 export interface LearningCurveRow {
-  /** Round (iteration) number, from 1. */
+  /** Round (iteration) number; 0 is the starting model before any round, when a fit records it. */
   readonly round: number;
   /** Which rows the loss was measured on. */
   readonly set: 'training' | 'watched';
@@ -45,7 +45,10 @@ const LEGEND = { labelExpr: "datum.label === 'training' ? 'training rows' : 'wat
  * );
  */
 export function chartLearningCurve(rows: readonly LearningCurveRow[], options: LearningCurveOptions = {}): ChartSpec {
-  const [title, subtitle] = titles(options, 'Learning curve', 'Loss per round on the training rows and on the watched rows');
+  const sets = new Set(rows.map((r) => r.set));
+  const [title, subtitle] = titles(options, 'Learning curve', sets.size === 1 && sets.has('training')
+    ? 'Loss per round on the training rows (no watched rows)'
+    : sets.size === 1 && sets.has('watched') ? 'Loss per round on the watched rows' : 'Loss per round on the training and watched rows');
   if (rows.length === 0) return chartEmpty(title, 'No rounds were recorded.', options);
   const size = plotSize(options);
   const lossName = options.lossName ?? 'loss';
@@ -55,13 +58,20 @@ export function chartLearningCurve(rows: readonly LearningCurveRow[], options: L
     if (options.logScale && !(loss > 0)) throw errors.chartInput(CHART, 'loss', i, loss, 'a positive number (log scale)');
     return { round: checkFinite(CHART, 'round', i, r.round), set: r.set, loss };
   });
+  let first = Infinity, last = -Infinity;
+  for (const v of values) { first = Math.min(first, v.round); last = Math.max(last, v.round); }
+  if (typeof options.bestRound === 'number' && Number.isFinite(options.bestRound)) {
+    first = Math.min(first, options.bestRound); last = Math.max(last, options.bestRound);
+  }
+  // The x-axis stops at the first and last round (no rounding out to a "nice" number).
+  const xScale = first < last ? { domain: [first, last], nice: false, zero: false } : { zero: false };
   const layers: Record<string, unknown>[] = [
     {
       mark: { type: 'line', interpolate: 'linear' },
       encoding: {
-        x: { field: 'round', type: 'quantitative', title: 'Round', axis: { format: 'd', tickMinStep: 1 } },
+        x: { field: 'round', type: 'quantitative', title: 'Round', scale: xScale, axis: { format: 'd', tickMinStep: 1 } },
         y: {
-          field: 'loss', type: 'quantitative', title: lossName,
+          field: 'loss', type: 'quantitative', title: `${lossName[0]?.toUpperCase() ?? ''}${lossName.slice(1)}`,
           scale: options.logScale ? { type: 'log' } : { zero: false },
         },
         color: {
@@ -82,19 +92,18 @@ export function chartLearningCurve(rows: readonly LearningCurveRow[], options: L
     const best = checkFinite(CHART, 'bestRound', 0, options.bestRound);
     const atBest = values.find((v) => v.set === 'watched' && v.round === best);
     const label = atBest ? `best round ${best} · ${lossName} ${formatNumber(atBest.loss)}` : `best round ${best}`;
+    // In the right third of the plot the label goes to the left of the rule, so it is not cut at the edge.
+    const onLeft = last > first && (best - first) / (last - first) > 2 / 3;
+    const data = { values: [{ round: best, label }] };
     layers.push(
+      { data, mark: { type: 'rule', color: ROLE.reference, strokeWidth: 1.5 }, encoding: { x: { field: 'round', type: 'quantitative' } } },
       {
-        data: { values: [{ round: best, label }] },
-        mark: { type: 'rule', strokeDash: [4, 3], color: ROLE.reference },
-        encoding: { x: { field: 'round', type: 'quantitative' } },
-      },
-      {
-        data: { values: [{ round: best, label }] },
-        mark: { type: 'text', align: 'left', dx: 5, baseline: 'top', y: 4, color: ROLE.reference },
+        data,
+        mark: { type: 'text', align: onLeft ? 'right' : 'left', dx: onLeft ? -5 : 5, baseline: 'top', y: 4, color: ROLE.reference },
         encoding: { x: { field: 'round', type: 'quantitative' }, text: { field: 'label' } },
       },
     );
-    if (options.subtitle === undefined) sub = [`${subtitle}; the dashed line marks the best round`];
+    if (options.subtitle === undefined) sub = [`${subtitle}; the grey line marks the best round`];
   }
   return finishChart({ width: size.width, height: size.height, data: { values }, layer: layers }, title, sub);
 }

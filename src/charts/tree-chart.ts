@@ -10,6 +10,7 @@ import { formatNumber, formatShare } from './format-number.js';
 import { finishChart, titles, type ChartOptions, type ChartSpec } from './spec.js';
 import { ROLE, SEQUENTIAL_RAMP, SERIES_COLOURS } from './theme.js';
 import { countBelow, treeEdges, type TreeFeature } from './tree-labels.js';
+import { BOX_HALF_W, LINE_FONT, sizeBoxes, textRoom, TITLE_FONT } from './tree-box-size.js';
 import { layoutTidyTree } from './tree-layout.js';
 
 /** A fitted tree with the names needed to label it. */
@@ -27,14 +28,18 @@ export interface TreeChartOptions extends Omit<ChartOptions, 'width' | 'height'>
   readonly maxDepth?: number;
   /** Name of the predicted quantity (regression legend title). __Default:__ 'value'. */
   readonly valueName?: string;
-  /** Pixels per node slot across. __Default:__ 128. */
+  /**
+   * Pixels per node slot across (a box is 88% of a slot). __Default:__ 128, widened so the longest caption
+   * shown fits its box, up to 220; longer captions end in "…".
+   */
   readonly slotWidth?: number;
-  /** Pixels per level down. __Default:__ 92. */
+  /** Pixels per level down. __Default:__ 92 (108 when a caption takes two lines). */
   readonly levelHeight?: number;
 }
 
-const BOX_HALF_W = 0.44;
+/** Box half-height in levels: normal, and with two-line titles. */
 const BOX_HALF_H = 0.31;
+const BOX_HALF_H_WRAPPED = 0.35;
 
 function nodeHeadline(tree: FlatTree, n: number, input: TreeChartInput): { title: string; share?: string; mean: number } {
   const k = tree.nOutputs;
@@ -53,8 +58,8 @@ function nodeHeadline(tree: FlatTree, n: number, input: TreeChartInput): { title
  * Draw a fitted tree.
  *
  * @param input   The `FlatTree`, feature names/categories and class labels.
- * @param options `maxDepth` __Default:__ 3; `valueName` __Default:__ 'value'; `slotWidth` __Default:__ 128;
- *                `levelHeight` __Default:__ 92; plus title and subtitle.
+ * @param options `maxDepth` __Default:__ 3; `valueName` __Default:__ 'value'; `slotWidth` __Default:__ 128, widened up
+ *                to 220 to fit captions; `levelHeight` __Default:__ 92 (108 with two-line captions); plus title and subtitle.
  * @example
  * chartTree({ tree, features: model.features, classes: model.target.classes }, { maxDepth: 2 });
  */
@@ -62,9 +67,8 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
   const { tree } = input;
   const maxDepth = options.maxDepth ?? 3;
   if (!(Number.isInteger(maxDepth) && maxDepth >= 0)) throw errors.badOption('maxDepth', maxDepth, 'an integer >= 0');
-  const slot = options.slotWidth ?? 128, level = options.levelHeight ?? 92;
-  if (!(slot >= 60)) throw errors.badOption('slotWidth', slot, 'a number of pixels >= 60');
-  if (!(level >= 60)) throw errors.badOption('levelHeight', level, 'a number of pixels >= 60');
+  if (options.slotWidth !== undefined && !(options.slotWidth >= 60)) throw errors.badOption('slotWidth', options.slotWidth, 'a number of pixels >= 60');
+  if (options.levelHeight !== undefined && !(options.levelHeight >= 60)) throw errors.badOption('levelHeight', options.levelHeight, 'a number of pixels >= 60');
   if (tree.nNodes === 0) return chartEmpty(options.title ?? 'Tree', 'The tree has no nodes.', {});
   const classification = input.classes !== undefined && tree.nOutputs > 1;
   if (input.classes !== undefined && tree.nOutputs !== input.classes.length && tree.nOutputs > 1) {
@@ -105,10 +109,10 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
     if (depthOf[n] < 0) continue;
     const x = layout.x[n], d = depthOf[n];
     const head = nodeHeadline(tree, n, input);
-    const rows = `${formatNumber(tree.count[n])} rows${rootRows > 0 && n !== 0 ? ` · ${formatShare(tree.count[n] / rootRows)}` : ''}`;
+    const rows = `${formatNumber(tree.count[n])} ${tree.count[n] === 1 ? 'row' : 'rows'}${rootRows > 0 && n !== 0 ? ` · ${formatShare(tree.count[n] / rootRows)}` : ''}`;
     const third = classification ? '' : tree.kind[n] === LEAF ? '' : `mean ${formatNumber(head.mean)}`;
     const hidden = collapsed.has(n) ? countBelow(tree, n, input.features) : 0;
-    nodes.push({ id: n, x, d, x0: x - BOX_HALF_W, x1: x + BOX_HALF_W, y0: d - BOX_HALF_H, y1: d + BOX_HALF_H,
+    nodes.push({ id: n, x, d, x0: x - BOX_HALF_W, x1: x + BOX_HALF_W,
       title: head.title, rows, third, leaf: tree.kind[n] === LEAF, collapsed: hidden > 0, note: hidden > 0 ? `+ ${hidden} nodes below` : '',
       mean: head.mean });
     if (classification) {
@@ -124,12 +128,19 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
       }
     }
   }
+  const sized = sizeBoxes(nodes as { title: string; rows: string; third: string }[], options.slotWidth);
+  const slot = sized.slot;
+  // Two-line titles: taller boxes, more room between levels, the title block moved up.
+  const halfH = sized.wrapped ? BOX_HALF_H_WRAPPED : BOX_HALF_H;
+  const level = options.levelHeight ?? (sized.wrapped ? 108 : 92);
+  const titleAt = sized.wrapped ? -0.19 : -0.16, rowsAt = sized.wrapped ? 0.02 : 0;
+  nodes.forEach((node, i) => Object.assign(node, { title: sized.titles[i], y0: (node.d as number) - halfH, y1: (node.d as number) + halfH }));
   const links: Record<string, unknown>[] = [];
   const labels: Record<string, unknown>[] = [];
   for (const e of edgeInfo) {
     const xp = layout.x[e.parent], xc = layout.x[e.child], d = depthOf[e.parent];
     const mid = d + 0.47;
-    links.push({ ax: xp, ay: d + BOX_HALF_H, bx: xp, by: mid }, { ax: xp, ay: mid, bx: xc, by: mid }, { ax: xc, ay: mid, bx: xc, by: d + 1 - BOX_HALF_H });
+    links.push({ ax: xp, ay: d + halfH, bx: xp, by: mid }, { ax: xp, ay: mid, bx: xc, by: mid }, { ax: xc, ay: mid, bx: xc, by: d + 1 - halfH });
     labels.push({ x: xc, y: d + 0.59, text: `${e.takesMissing ? '∗ ' : ''}${e.condition}` });
   }
   const notes = [`∗ missing values follow this branch`];
@@ -142,7 +153,7 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
   const text = (field: string, dy: number, extra: Record<string, unknown>) => ({
     data: { values: nodes },
     transform: [{ calculate: `datum.d + ${dy}`, as: 'ty' }],
-    mark: { type: 'text', baseline: 'middle', limit: slot * 2 * BOX_HALF_W - 8, ...extra },
+    mark: { type: 'text', baseline: 'middle', limit: textRoom(slot), ...extra },
     encoding: { x: X('x'), y: Y('ty'), text: { field } },
   });
   const fill = classification
@@ -154,12 +165,12 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
       encoding: { x: X('x0'), x2: { field: 'x1' }, y: Y('y0'), y2: { field: 'y1' }, fill } },
     { data: { values: nodes }, transform: [{ filter: 'datum.collapsed' }], mark: { type: 'rect', cornerRadius: 4, stroke: '#5f6673', strokeWidth: 1.2, strokeDash: [4, 3] },
       encoding: { x: X('x0'), x2: { field: 'x1' }, y: Y('y0'), y2: { field: 'y1' }, fill } },
-    text('title', -0.16, { fontWeight: 'bold', fontSize: 11.5, color: ROLE.ink }),
-    text('rows', 0.0, { fontSize: 10.5, color: '#3b4250' }),
+    text('title', titleAt, { fontWeight: 'bold', fontSize: TITLE_FONT, lineHeight: 13, color: ROLE.ink }),
+    text('rows', rowsAt, { fontSize: LINE_FONT, color: '#3b4250' }),
     { data: { values: labels }, mark: { type: 'text', align: 'left', dx: 4, baseline: 'middle', fontSize: 10, color: '#3b4250', limit: slot - 16 },
       encoding: { x: X('x'), y: Y('y'), text: { field: 'text' } } },
   ];
-  if (!classification) layers.push(text('third', 0.16, { fontSize: 10.5, color: '#3b4250' }));
+  if (!classification) layers.push(text('third', 0.16, { fontSize: LINE_FONT, color: '#3b4250' }));
   if (classification && bars.length > 0) {
     layers.push({ data: { values: bars }, mark: { type: 'rect' },
       encoding: { x: X('bx0'), x2: { field: 'bx1' }, y: Y('by0'), y2: { field: 'by1' },
@@ -167,7 +178,7 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
         tooltip: [{ field: 'cls', title: 'class' }, { field: 'share' }] } });
   }
   if (collapsed.size > 0) {
-    layers.push({ ...text('note', BOX_HALF_H + 0.12, { fontSize: 10, fontStyle: 'italic', color: ROLE.muted }), transform: [{ filter: 'datum.collapsed' }, { calculate: `datum.d + ${BOX_HALF_H + 0.12}`, as: 'ty' }] });
+    layers.push({ ...text('note', halfH + 0.12, { fontSize: 10, fontStyle: 'italic', color: ROLE.muted }), transform: [{ filter: 'datum.collapsed' }, { calculate: `datum.d + ${halfH + 0.12}`, as: 'ty' }] });
   }
   return finishChart({ width: (layout.width + 1) * slot, height: (deepest + 1) * level, layer: layers }, title, subtitle);
 }

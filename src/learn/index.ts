@@ -60,4 +60,11 @@ export type { ImpurityImportanceRow } from './ensemble/importance.js';
 export type { OobPoint } from './ensemble/oob.js';
 export type { AdaBoostModel, AdaBoostRound, BoostingModel, EnsembleModel, ForestModel, StackModel } from './ensemble/models.js';
 export { defaultEnsembleEngine } from './ensemble/engine.js';
+export type { RoundCallback, RoundInfo, TreeCallback, TreeInfo } from './ensemble/progress.js';
 // --- end ensembles ---
+// Histogram engine and workers (speed engine)
+export { growHistogram } from './hist/grow-histogram.js';
+export { runTreeJobs } from './parallel/tree-jobs.js';
+export type { TreeJobSpec } from './parallel/tree-jobs.js';
+export { useHistogramWorkers } from './parallel/hist-workers.js';
+export { binFrameParallel } from './parallel/bin-job.js';

@@ -18,7 +18,12 @@ const acceptedOptions: Readonly<Record<string, readonly string[]>> = {
 
 type Scores = Record<string, number>;
 
-/** The scores shown for one `onRound` report (`score`: the learner's training measure, loss or error). */
+/**
+ * The scores shown for one `onRound` report (`score`: the learner's training measure, loss or error).
+ * @example
+ * roundScores({ round: 3, total: 10, trainLoss: 0.5, watchLoss: 0.6, bestRound: 2, last: false }, 'loss');
+ * // { 'training loss': 0.5, 'watched loss': 0.6, 'best round': 2 }
+ */
 export function roundScores(info: RoundInfo, score: 'loss' | 'error'): Scores {
   const out: Scores = { [`training ${score}`]: info.trainLoss };
   if (!Number.isNaN(info.watchLoss)) {
@@ -28,7 +33,11 @@ export function roundScores(info: RoundInfo, score: 'loss' | 'error'): Scores {
   return out;
 }
 
-/** The scores shown for one `onTree` report. */
+/**
+ * The scores shown for one `onTree` report (none while no row has been out of bag).
+ * @example
+ * treeScores({ done: 4, total: 5, oobError: 0.25 }); // { 'out-of-bag error': 0.25 }
+ */
 export function treeScores(info: TreeInfo): Scores {
   return Number.isNaN(info.oobError) ? {} : { 'out-of-bag error': info.oobError };
 }

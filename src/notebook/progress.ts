@@ -6,6 +6,7 @@
  * Learners' callbacks feed it: `progress.step(done, { train: 0.31, watched: 0.35 })`.
  */
 import { randomUUID } from 'node:crypto';
+import { ROLE } from '../charts/theme.js';
 import type { MimeBundle } from './display-types.js';
 import { emitDisplay, hasRichSink, writeStream } from './display-sink.js';
 import { formatCell } from './format-cell.js';
@@ -57,7 +58,7 @@ export function progressLine(label: string, unit: string, done: number, total: n
 function bar(done: number, total: number | undefined): string {
   if (!total) return '';
   const share = Math.max(0, Math.min(1, done / total));
-  return `<div style="width:240px;height:6px;background:#e5e5e5"><div style="width:${(share * 100).toFixed(1)}%;height:6px;background:#4c78a8"></div></div>`;
+  return `<div style="width:240px;height:6px;background:#e5e5e5"><div style="width:${(share * 100).toFixed(1)}%;height:6px;background:${ROLE.primary}"></div></div>`;
 }
 
 /**

@@ -63,6 +63,35 @@ export function equalCountCuts(weights: Float64Array, limit: number): number[] {
   return cuts;
 }
 
+/**
+ * Distinct non-NaN values (ascending) with their counts, or null when there are more than `cap` of them.
+ * Cheaper than sorting the column when values repeat (rounded measurements, counts, dates).
+ * @example
+ * distinctCounts(Float64Array.of(2, 1, 2), 10); // { values: [1, 2], counts: [1, 2] }
+ */
+export function distinctCounts(values: Float64Array, cap: number): { values: Float64Array; counts: Float64Array } | null {
+  const counts = new Map<number, number>();
+  for (let i = 0; i < values.length; i++) {
+    const x = values[i];
+    if (x !== x) continue;
+    const c = counts.get(x);
+    if (c === undefined) {
+      if (counts.size >= cap) return null;
+      counts.set(x, 1);
+    } else counts.set(x, c + 1);
+  }
+  const vals = Float64Array.from(counts.keys()).sort();
+  return { values: vals, counts: Float64Array.from(vals, (v) => counts.get(v) as number) };
+}
+
+function boundsFromCounts(vals: Float64Array, counts: Float64Array, limit: number): Float64Array {
+  const cuts = equalCountCuts(counts, limit);
+  const upper = new Float64Array(cuts.length + 1);
+  cuts.forEach((j, b) => { upper[b] = midpoint(vals[j], vals[j + 1]); });
+  upper[cuts.length] = Infinity;
+  return upper;
+}
+
 function boundsFromSorted(values: Float64Array, limit: number): Float64Array {
   // run-length encode the sorted column
   const vals: number[] = [], counts: number[] = [];
@@ -105,6 +134,9 @@ export function boundsFromDistinct(distinct: Float64Array): Float64Array {
   return upper;
 }
 
+/** Up to this many distinct values, a large column is counted in a hash map instead of sorted (same bins). */
+const DISTINCT_CAP = 1 << 16;
+
 /** Options of `numericBounds`. */
 export interface BoundsOptions {
   /** Most bins (not counting the missing bin), 2..255. */
@@ -143,6 +175,10 @@ export function numericBins(values: Float64Array, opts: BoundsOptions): NumericB
 export function numericBounds(values: Float64Array, opts: BoundsOptions): Float64Array {
   const distinct = distinctUpTo(values, opts.limit);
   if (distinct) return boundsFromDistinct(distinct);
+  if (values.length > 4 * DISTINCT_CAP) {
+    const dc = distinctCounts(values, DISTINCT_CAP);
+    if (dc) return boundsFromCounts(dc.values, dc.counts, opts.limit);
+  }
   let present = 0;
   for (let i = 0; i < values.length; i++) if (values[i] === values[i]) present++;
   if (present <= opts.exactRows) {

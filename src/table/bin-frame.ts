@@ -80,13 +80,36 @@ export function binOfValue(upper: Float64Array, x: number): number {
   return lo;
 }
 
+/** Buckets of the lookup table `codeNumeric` uses to start its search near the right bin. */
+const BUCKETS = 4096;
+
 /**
- * Write the codes of a numeric column into `out` (same length as `values`).
+ * Write the codes of a numeric column into `out` (same length as `values`): the same codes as
+ * `binOfValue`, found by a bucket table over [upper[0], last finite bound] that gives a bin at or below
+ * the answer, then a short forward scan.
  * @example
  * codeNumeric(Float64Array.of(1, NaN), Float64Array.of(1.5, Infinity), out); // out = [0, 255]
  */
 export function codeNumeric(values: Float64Array, upper: Float64Array, out: Uint8Array): void {
-  for (let i = 0; i < values.length; i++) out[i] = binOfValue(upper, values[i]);
+  const nb = upper.length;
+  const lo = upper[0], hi = upper[nb - 2];
+  if (nb < 8 || !(hi > lo) || !Number.isFinite(hi - lo)) {
+    for (let i = 0; i < values.length; i++) out[i] = binOfValue(upper, values[i]);
+    return;
+  }
+  const scale = BUCKETS / (hi - lo);
+  // start[g]: bin of the lower edge of bucket g - 1 (one bucket of margin for rounding)
+  const start = new Uint8Array(BUCKETS + 1);
+  for (let g = 2; g <= BUCKETS; g++) start[g] = binOfValue(upper, lo + (g - 1) / scale);
+  for (let i = 0; i < values.length; i++) {
+    const x = values[i];
+    if (x !== x) { out[i] = MISSING_BIN; continue; }
+    if (x <= lo) { out[i] = 0; continue; }
+    if (x > hi) { out[i] = nb - 1; continue; }
+    let b = start[Math.min(BUCKETS, Math.floor((x - lo) * scale))];
+    while (x > upper[b]) b++;
+    out[i] = b;
+  }
 }
 
 /**

@@ -3,7 +3,7 @@
  * relation, a connection to an in-memory DuckDB, and how each DuckDB column type is brought into
  * JavaScript (numbers as DOUBLE, dates and timestamps as epoch milliseconds, text as dictionary codes).
  */
-import { DuckDBInstance, type DuckDBConnection } from '@duckdb/node-api';
+import type { DuckDBConnection } from '@duckdb/node-api';
 import { errors } from '../errors.js';
 
 /** A Parquet path, a `sql:` text, or a query object. */
@@ -43,6 +43,8 @@ export function relationOf(source: DuckInput): { label: string; sql: string } {
 
 /** Open an in-memory database; the caller closes it with `done()`. */
 export async function openDuck(): Promise<{ con: DuckDBConnection; done: () => void }> {
+  // Loaded on first use so that importing coppice does not load DuckDB's native module.
+  const { DuckDBInstance } = await import('@duckdb/node-api');
   const instance = await DuckDBInstance.create(':memory:');
   const con = await instance.connect();
   return { con, done: () => { con.closeSync(); instance.closeSync(); } };

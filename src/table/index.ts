@@ -32,3 +32,11 @@ export type { GlanceRow } from './glance.js';
 export type { EncodedKind } from './value-counts.js';
 export { featureRangesOf } from './ranges.js';
 export type { TrainingRanges } from './ranges.js';
+// Binning and big extracts (speed engine)
+export { MISSING_BIN, binFrame } from './bin-frame.js';
+export type { BinnedFeature, BinnedFrame, BinOptions } from './bin-frame.js';
+export { binnedFrameFor, cachedBinnedFrame, rememberBinnedFrame } from './bin-cache.js';
+export type { BinCacheOptions } from './bin-cache.js';
+export { QuantileSketch } from './bin-sketch.js';
+export { readWithDuckDB } from './duckdb.js';
+export { streamFrameWithDuckDB } from './duckdb-stream.js';

@@ -7,7 +7,7 @@ import { errors } from '../errors.js';
 import type { Column, Frame } from './frame.js';
 
 /** An arquero table, an array of row objects, or a Frame. */
-export type TableInput = Table | readonly Record<string, unknown>[] | Frame;
+export type TableInput = Table | readonly object[] | Frame;
 
 /** Column names, row count and each column's values (row order as the input presents it). */
 export interface RawTable {

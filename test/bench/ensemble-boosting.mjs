@@ -7,6 +7,8 @@
  *
  * wide: 200,000 rows × 28 numeric features, two classes (logistic loss), 20 rounds, 63 leaves, histogram engine.
  * cell: 50,000 rows × 10 numeric features, numeric target (squared loss), 200 rounds, default tree settings.
+ * loop: the round loop almost alone — one feature and stumps, so growing a tree is a small share:
+ *       200,000 rows, logistic loss, 50 rounds (loop-logistic) and squared loss, 50 rounds (loop-squared).
  * Binning is timed apart from fitting (the first fit on a frame bins it; later fits reuse the bins).
  * "grower only" is the CPU time of growing the same number of trees of the same settings directly
  * (`growTree` on a fixed response), so fit CPU − grower CPU estimates the work of the round loop itself.
@@ -21,7 +23,7 @@ const arg = (name, dflt) => { const i = process.argv.indexOf(name); return i > 0
 const distDir = resolve(arg('--dist', join(here, '..', '..', 'dist')));
 const dist = (p) => pathToFileURL(join(distDir, p)).href;
 const repeat = Number(arg('--repeat', '3'));
-const only = arg('--only', 'wide,cell').split(',');
+const only = arg('--only', 'wide,cell,loop').split(',');
 const workers = Number(arg('--workers', '1'));
 
 const { createRng } = await import(dist('util/rng.js'));
@@ -107,4 +109,17 @@ function measure(name, data, options) {
 
 console.log(`ensemble-boosting bench: ${distDir} (node ${process.version}, ${workers} histogram thread(s))`);
 if (only.includes('wide')) measure('wide', wideData(200_000, 28, 1), { loss: 'logistic', rounds: 20, leafBudget: 63, depthLimit: Infinity, engine: 'histogram', seed: 1 });
+if (only.includes('loop')) {
+  const wide = wideData(200_000, 5, 3);
+  const one = (d) => ({ ...d, features: makeFrame(d.features.nRows, [d.features.columns[0]]) });
+  const two = one(wide), num = one(cellData(200_000, 4, 4));
+  for (const [name, data, loss] of [['loop-logistic', two, 'logistic'], ['loop-squared', num, 'squared']]) {
+    const o = { loss, rounds: 50, depthLimit: 1, engine: 'histogram', seed: 1 };
+    binnedFrameFor(data.features);
+    fitBoosting(data, { ...o, rounds: 2 }); // warm up
+    let low = Infinity;
+    for (let r = 0; r < Math.max(3, repeat); r++) { const c0 = cpu(); fitBoosting(data, o); low = Math.min(low, cpu() - c0); }
+    console.log(`${name.padEnd(13)} 200,000 rows × 1 feature, stumps, 50 rounds: lowest cpu ${low.toFixed(3)} s = ${((low / 50) * 1000).toFixed(2)} ms per round (grower included)`);
+  }
+}
 if (only.includes('cell')) measure('cell', cellData(50_000, 10, 2), { rounds: 200, engine: 'histogram', seed: 1 });

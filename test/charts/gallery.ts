@@ -6,6 +6,11 @@
 import { LEAF, MULTIWAY, NUMERIC, SUBSET, type FlatTree } from '../../src/learn/flat-tree.js';
 import { createRng, type Rng } from '../../src/util/rng.js';
 import * as charts from '../../src/charts/index.js';
+import { confusionTable } from '../../src/assess/metrics/confusion-table.js';
+import { fitAdaBoost } from '../../src/learn/ensemble/adaboost.js';
+import { fitBoosting } from '../../src/learn/ensemble/boosting.js';
+import { fitForest } from '../../src/learn/ensemble/forest.js';
+import { crateDataset } from './packhouse-data.js';
 import type { ChartSpec } from '../../src/charts/index.js';
 
 const VARIETIES = ['Elstar', 'Jonagold', 'Boskoop', 'Topaz', 'Santana'];
@@ -159,10 +164,13 @@ export function gallery(): Record<string, ChartSpec> {
     { feature: 'variety', value: 0.018, low: 0.011, high: 0.026 }, { feature: 'harvest_week', value: 0.004, low: -0.003, high: 0.01 },
     { feature: 'crate_id', value: -0.002, low: -0.006, high: 0.002 },
   ], { valueName: 'drop in accuracy when shuffled (share of rows)', intervalName: 'whiskers: middle 90% of 20 shuffles' });
-  out['importance-plain'] = charts.chartImportance(['bruise_score', 'storage_hours', 'variety', 'harvest_week', 'grower_region', 'pallet_position', 'picker_team', 'crate_material'].map((feature, i) => ({ feature, value: 0.38 / (i + 1) ** 1.3 })), { valueName: 'impurity decrease (share of total)' });
+  const raw = [1, 2, 3, 4, 5, 6, 7, 8].map((i) => 1 / i ** 1.3);
+  const rawSum = raw.reduce((a, b) => a + b, 0);
+  out['importance-plain'] = charts.chartImportance(['bruise_score', 'storage_hours', 'variety', 'harvest_week', 'grower_region', 'pallet_position', 'picker_team', 'crate_material'].map((feature, i) => ({ feature, value: raw[i] / rawSum })), { valueName: 'impurity decrease (share of total)' });
   const counts = [[0, 0, 0], [0, 0, 0], [0, 0, 0]];
   for (const c of crates) counts[c.grade][c.score.indexOf(Math.max(...c.score))]++;
   out['confusion'] = charts.chartConfusion({ classes: GRADES, counts });
+  out['confusion-sparse'] = charts.chartConfusion(defectConfusion(), { title: 'Defect found at grading' });
   const roc = GRADES.map((label, k) => ({ label, points: rocPoints(crates.map((c) => c.score[k]), crates.map((c) => c.grade === k)) }));
   out['roc'] = charts.chartRoc(roc);
   out['roc-single'] = charts.chartRoc([roc[2]]);
@@ -240,6 +248,54 @@ export function gallery(): Record<string, ChartSpec> {
   ], { runs: ['June extract', 'July extract'] });
   out['tree-classes'] = charts.chartTree({ tree: gradeTree(), features: FEATURES, classes: GRADES });
   out['tree-regression'] = charts.chartTree({ tree: shelfTree(), features: FEATURES }, { valueName: 'shelf life (days)' });
+  out['tree-long-names'] = charts.chartTree({ tree: oneRowLeafTree(), features: LONG_FEATURES, classes: GRADES });
+  Object.assign(out, fittedModelCharts());
   out['empty'] = charts.chartLearningCurve([], { lossName: 'log loss' });
   return out;
+}
+
+/** Defect classes at grading: confusions only between look-alike defects, so many cells are empty. */
+function defectConfusion(): ReturnType<typeof confusionTable> {
+  const rng = createRng(17);
+  const defects = ['none', 'bruise', 'rot', 'scab', 'russet', 'stem damage'];
+  const actual: number[] = [], predicted: number[] = [];
+  for (let i = 0; i < 900; i++) {
+    const a = rng.next() < 0.55 ? 0 : 1 + rng.int(5);
+    const u = rng.next();
+    // a defect is missed (graded 'none') 6% of the time and taken for its neighbour 10% of the time
+    const p = a === 0 ? (u < 0.03 ? 1 : 0) : u < 0.06 ? 0 : u < 0.16 ? 1 + (a % 5) : a;
+    actual.push(a); predicted.push(p);
+  }
+  return confusionTable(actual, predicted, { classes: defects });
+}
+
+export const LONG_FEATURES = [
+  { name: 'Storage Duration Before Grading (h)' }, { name: 'Bruise Score (0–10)' }, { name: 'Harvest Week' },
+  { name: 'Variety', categories: VARIETIES },
+];
+
+/** gradeTree with one leaf reached by a single training row. */
+export function oneRowLeafTree(): FlatTree {
+  const t = gradeTree();
+  const count = Float64Array.from(t.count);
+  count[8] = 1;
+  return { ...t, count, cover: Float64Array.from(count) };
+}
+
+/** Charts made straight from fitted models (boosting, AdaBoost, forests) on seeded crates. */
+export function fittedModelCharts(): Record<string, ChartSpec> {
+  const train = crateDataset(600, 'grade'), watch = crateDataset(400, 'grade', 2024, 600);
+  const gb = fitBoosting(train, { rounds: 200, learningRate: 0.1, depthLimit: 3, watch, patience: 40, seed: 1 });
+  const ada = fitAdaBoost(train, { rounds: 60, depthLimit: 2, watch, seed: 1 });
+  const shelf = crateDataset(600, 'shelf');
+  const forests = {
+    '2 features per split': fitForest(train, { size: 120, featuresPerSplit: 2, seed: 3 }),
+    'all 4 features': fitForest(train, { size: 120, featuresPerSplit: 4, seed: 3 }),
+  };
+  return {
+    'boosting-curve': charts.chartBoostingCurve(gb),
+    'adaboost-curve': charts.chartBoostingCurve(ada),
+    'forest-oob': charts.chartOutOfBag(forests, { seriesName: 'features tried per split' }),
+    'forest-oob-regression': charts.chartOutOfBag(fitForest(shelf, { size: 80, seed: 4 })),
+  };
 }

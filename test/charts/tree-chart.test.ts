@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { chartTree } from '../../src/charts/tree-chart.js';
 import { CoppiceError } from '../../src/errors.js';
 import { LEAF, type FlatTree } from '../../src/learn/flat-tree.js';
-import { FEATURES, gradeTree, shelfTree } from './gallery.js';
+import { FEATURES, gradeTree, LONG_FEATURES, oneRowLeafTree, shelfTree } from './gallery.js';
 import { checkSpec } from './validate-spec.js';
 
 type Layered = { layer: { data?: { values: Record<string, unknown>[] } }[]; title: { text: string; subtitle?: string }; width: number; height: number };
@@ -44,6 +44,23 @@ describe('chartTree({ tree, features, classes }, options)', () => {
     expect(nodeRows(spec)).toHaveLength(1);
     expect(nodeRows(spec)[0].title).toBe('R 50%');
     expect((await checkSpec(spec)).warnings).toEqual([]);
+  });
+
+  it('a node reached by one training row says "1 row", not "1 rows"', () => {
+    const rows = nodeRows(chartTree({ tree: oneRowLeafTree(), features: FEATURES, classes: ['A', 'B', 'R'] }));
+    expect(rows.find((r) => r.id === 8)!.rows).toBe('1 row · 0.1%'); // 1 of 1,200 rows
+    expect(rows.find((r) => r.id === 3)!.rows).toBe('410 rows · 34.2%');
+  });
+
+  it('long feature names: wider slots, and a name too long even then on two lines in taller boxes', async () => {
+    const spec = chartTree({ tree: gradeTree(), features: LONG_FEATURES, classes: ['A', 'B', 'R'] });
+    const rows = nodeRows(spec);
+    expect(rows.find((r) => r.id === 0)!.title).toBe('Bruise Score (0–10)');
+    expect(rows.find((r) => r.id === 1)!.title).toEqual(['Storage Duration', 'Before Grading (h)']);
+    expect((spec as unknown as Layered).height).toBe(4 * 108);
+    const { schema, warnings } = await checkSpec(spec);
+    expect(schema).toEqual([]);
+    expect(warnings).toEqual([]);
   });
 
   it('rejects a bad maxDepth and class labels that do not match the outputs', () => {

@@ -71,3 +71,46 @@ describe('binnedFrameFor(frame, options)', () => {
     expect(() => rememberBinnedFrame(f, binFrame(makeFrame({ x: [1] })))).toThrow(/does not match/);
   });
 });
+
+describe('codeNumeric(values, upper, out)', () => {
+  it('gives the same codes as binOfValue on uniform, skewed and tied data', async () => {
+    const { codeNumeric } = await import('../../src/table/bin-frame.js');
+    const { numericBounds } = await import('../../src/table/bin-edges.js');
+    const { createRng } = await import('../../src/util/rng.js');
+    const rng = createRng(8);
+    const sets = [
+      Float64Array.from({ length: 20000 }, () => rng.next()),
+      Float64Array.from({ length: 20000 }, () => Math.exp(rng.normal() * 3)),
+      Float64Array.from({ length: 20000 }, () => (rng.int(5) === 0 ? NaN : Math.round(rng.normal() * 100) / 10)),
+    ];
+    for (const xs of sets) {
+      const upper = numericBounds(xs, { limit: 255, exactRows: 1 << 20, sketchK: 800 });
+      const out = new Uint8Array(xs.length);
+      codeNumeric(xs, upper, out);
+      // also at the bounds themselves and their neighbours
+      const edges = Float64Array.from(Array.from(upper.subarray(0, -1)).flatMap((u) => [u, u - Math.abs(u) * 1e-16, u + Math.abs(u) * 1e-15]));
+      const eo = new Uint8Array(edges.length);
+      codeNumeric(edges, upper, eo);
+      expect(Array.from(out)).toEqual(Array.from(xs, (x) => binOfValue(upper, x)));
+      expect(Array.from(eo)).toEqual(Array.from(edges, (x) => binOfValue(upper, x)));
+    }
+  });
+});
+
+describe('numericBounds on a large column with repeated values', () => {
+  it('counting distinct values gives the same bounds as sorting', async () => {
+    const { numericBounds, distinctCounts } = await import('../../src/table/bin-edges.js');
+    const { createRng } = await import('../../src/util/rng.js');
+    const rng = createRng(9);
+    const xs = Float64Array.from({ length: 300_000 }, () => Math.round(rng.normal() * 300) / 10);
+    const counted = numericBounds(xs, { limit: 255, exactRows: 1 << 20, sketchK: 800 });
+    expect(distinctCounts(xs, 1 << 16)).not.toBeNull();
+    // the same cut rule applied to a direct sort of the full column
+    const sorted = xs.slice().sort();
+    const vals: number[] = [], counts: number[] = [];
+    for (const x of sorted) { if (vals.length && vals[vals.length - 1] === x) counts[counts.length - 1]++; else { vals.push(x); counts.push(1); } }
+    const { equalCountCuts, midpoint } = await import('../../src/table/bin-edges.js');
+    const cuts = equalCountCuts(Float64Array.from(counts), 255);
+    expect(Array.from(counted.subarray(0, -1))).toEqual(cuts.map((j) => midpoint(vals[j], vals[j + 1])));
+  });
+});

@@ -47,7 +47,10 @@ export interface BoostingOptions extends MemberTreeOptions {
    * second-order gain — instead of a least-squares fit to the pseudo-residuals (src/learn/ensemble/
    * newton-response.ts; Friedman, Hastie & Tibshirani 2000). Leaf values are the same Newton steps either
    * way. For 'logistic', 'multiclass' and 'poisson'; with 'squared' it changes nothing (the hessian is 1);
-   * the other losses have no usable second derivative and reject it. __Default:__ false.
+   * the other losses have no usable second derivative and reject it. On the seeded data of
+   * test/bench/ensemble-newton.mjs it reached the lowest watched loss in fewer rounds (e.g. 58 instead of
+   * 72–74 for logistic, at the same loss) and a slightly lower one for 'multiclass' and 'poisson'.
+   * __Default:__ false (Friedman's least-squares trees).
    */
   readonly newtonTrees?: boolean;
   /**

@@ -11,6 +11,7 @@
  * budget is used; a split that would exceed it is skipped. Otherwise nodes are split breadth-first.
  * A categorical feature is used at most once per path in multiway mode.
  */
+import { checkGrowSettings } from '../check-grow-settings.js';
 import { errors } from '../../errors.js';
 import type { GrowResult, GrowTask } from '../grow-task.js';
 import { MULTIWAY, NUMERIC, SUBSET } from '../flat-tree.js';
@@ -75,19 +76,7 @@ export function growExact(task: GrowTask): GrowResult {
 }
 
 function checkSettings(task: GrowTask): void {
-  const s = task.settings;
-  const nonNeg = (name: string, v: number, int: boolean): void => {
-    if (!(v >= 0) || (int && v !== Infinity && !Number.isInteger(v))) throw errors.badOption(name, v, int ? 'a non-negative integer' : 'a non-negative number');
-  };
-  nonNeg('depthLimit', s.depthLimit, true);
-  nonNeg('leafWeight', s.leafWeight, false);
-  nonNeg('minGain', s.minGain, false);
-  nonNeg('featuresPerSplit', s.featuresPerSplit, true);
-  if (!(s.leafRows >= 1) || !Number.isInteger(s.leafRows)) throw errors.badOption('leafRows', s.leafRows, 'an integer >= 1');
-  if (!(s.leafBudget >= 2) || (s.leafBudget !== Infinity && !Number.isInteger(s.leafBudget))) {
-    throw errors.badOption('leafBudget', s.leafBudget, 'an integer >= 2 or Infinity');
-  }
-  if (s.categorical !== 'multiway' && s.categorical !== 'subset') throw errors.badOption('categorical', s.categorical, "'multiway' or 'subset'");
+  checkGrowSettings(task.settings);
 }
 
 /** Create the node owning `base[start, end)`: its value, and the split it would take (or null). */

@@ -23,12 +23,13 @@ export interface HuberLoss extends GroupLoss {
 export function huberLoss(alpha: number): HuberLoss {
   if (!(alpha > 0 && alpha <= 1)) throw errors.badOption('huberQuantile', alpha, 'a number in (0, 1]');
   let delta = NaN;
-  let diff = new Float64Array(0);
+  let diff = new Float64Array(0), every: Int32Array = new Int32Array(0);
   const huber = (d: number): number => { const a = Math.abs(d); return a <= delta ? 0.5 * d * d : delta * (a - 0.5 * delta); };
   const setDelta = (y: Float64Array, F: Float64Array, w: Float64Array): void => {
     if (diff.length !== y.length) diff = new Float64Array(y.length);
     for (let i = 0; i < y.length; i++) diff[i] = Math.abs(y[i] - F[i]);
-    delta = weightedQuantile(diff, w, allRows(y.length), 0, y.length, alpha);
+    if (every.length !== y.length) every = allRows(y.length);
+    delta = weightedQuantile(diff, w, every, 0, y.length, alpha);
   };
   return {
     name: 'huber', nOutputs: 1, leafRule: 'group',
