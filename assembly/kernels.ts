@@ -41,11 +41,12 @@ export function gatherClass(rowsPtr: usize, count: i32, wPtr: usize, clsPtr: usi
 
 /**
  * Value histograms of the listed features over a node's rows: per bin [rows, Σw, Σw·y] (stride 3 doubles).
- * Feature f's block starts at histPtr + f·256·3·8 and is cleared first.
+ * Feature f's block starts at histPtr + f·256·3·8 and is cleared first. The pair [Σw, Σw·y] of a bin is
+ * updated as one f64x2 (two independent lanes, the same additions as two scalar ones, so sums are
+ * bit-identical to the twin); two features per pass share the row index and the (w, w·y) pair.
  */
 export function histValue(codesPtr: usize, nRows: i32, rowsPtr: usize, count: i32, gwPtr: usize, gsPtr: usize,
   featsPtr: usize, nFeats: i32, histPtr: usize): void {
-  // two features per pass: the row index, weight and weighted value are loaded once for both
   let k = 0;
   for (; k + 1 < nFeats; k += 2) {
     const f1 = <usize>load<i32>(featsPtr + (<usize>k << 2));
@@ -56,15 +57,13 @@ export function histValue(codesPtr: usize, nRows: i32, rowsPtr: usize, count: i3
     memory.fill(h2, 0, BINS * 24);
     for (let i = 0; i < count; i++) {
       const r = <usize>load<i32>(rowsPtr + (<usize>i << 2));
-      const w = load<f64>(gwPtr + (<usize>i << 3)), s = load<f64>(gsPtr + (<usize>i << 3));
+      const ws = f64x2.replace_lane(f64x2.splat(load<f64>(gwPtr + (<usize>i << 3))), 1, load<f64>(gsPtr + (<usize>i << 3)));
       const p = h1 + <usize>load<u8>(c1 + r) * 24;
       store<f64>(p, load<f64>(p) + 1.0);
-      store<f64>(p, load<f64>(p, 8) + w, 8);
-      store<f64>(p, load<f64>(p, 16) + s, 16);
+      v128.store(p, f64x2.add(v128.load(p, 8), ws), 8);
       const q = h2 + <usize>load<u8>(c2 + r) * 24;
       store<f64>(q, load<f64>(q) + 1.0);
-      store<f64>(q, load<f64>(q, 8) + w, 8);
-      store<f64>(q, load<f64>(q, 16) + s, 16);
+      v128.store(q, f64x2.add(v128.load(q, 8), ws), 8);
     }
   }
   for (; k < nFeats; k++) {
@@ -74,10 +73,10 @@ export function histValue(codesPtr: usize, nRows: i32, rowsPtr: usize, count: i3
     memory.fill(h, 0, BINS * 24);
     for (let i = 0; i < count; i++) {
       const r = <usize>load<i32>(rowsPtr + (<usize>i << 2));
+      const ws = f64x2.replace_lane(f64x2.splat(load<f64>(gwPtr + (<usize>i << 3))), 1, load<f64>(gsPtr + (<usize>i << 3)));
       const p = h + <usize>load<u8>(col + r) * 24;
       store<f64>(p, load<f64>(p) + 1.0);
-      store<f64>(p, load<f64>(p, 8) + load<f64>(gwPtr + (<usize>i << 3)), 8);
-      store<f64>(p, load<f64>(p, 16) + load<f64>(gsPtr + (<usize>i << 3)), 16);
+      v128.store(p, f64x2.add(v128.load(p, 8), ws), 8);
     }
   }
 }
@@ -106,8 +105,9 @@ export function histSubtract(parentPtr: usize, childPtr: usize, outPtr: usize, f
   const block = <usize>(BINS * stride) << 3;
   for (let k = 0; k < nFeats; k++) {
     const off = <usize>load<i32>(featsPtr + (<usize>k << 2)) * block;
-    for (let j: usize = 0; j < block; j += 8) {
-      store<f64>(outPtr + off + j, load<f64>(parentPtr + off + j) - load<f64>(childPtr + off + j));
+    // block is a multiple of 16 bytes: two doubles per f64x2 lane pair, each lane an ordinary subtraction
+    for (let j: usize = 0; j < block; j += 16) {
+      v128.store(outPtr + off + j, f64x2.sub(v128.load(parentPtr + off + j), v128.load(childPtr + off + j)));
     }
   }
 }

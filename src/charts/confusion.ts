@@ -27,6 +27,10 @@ const CHART = 'chartConfusion';
  * Classes and counts from the tidy rows of `confusionTable` (src/assess): classes in the order they first
  * appear (actual classes, then any class only ever predicted); a pair with no row counts 0; a repeated pair
  * is an error.
+ *
+ * @example
+ * confusionFromRows(confusionTable([0, 1, 1], [0, 0, 1], { classes: ['stay', 'leave'] }));
+ * // { classes: ['stay', 'leave'], counts: Float64Array [1, 0, 1, 1] }
  */
 export function confusionFromRows(rows: readonly Pick<ConfusionTableRow, 'actual' | 'predicted' | 'count'>[]): ConfusionInput {
   const index = new Map<string, number>();

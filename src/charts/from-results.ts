@@ -39,7 +39,7 @@ export function chartSearch(
 
 /**
  * The bias–variance chart of a `biasVariance` result (regression rows: mse, biasSquared, variance; zero-one rows:
- * loss, bias, variance), with `complexity` naming the setting on the x-axis.
+ * loss, bias and net variance, which add up to the loss), with `complexity` naming the setting on the x-axis.
  * @example
  * const parts = biasVariance(train, test, (d, s) => fitTree(d, s), [{ depthLimit: 1 }, { depthLimit: 4 }]);
  * const spec = chartBiasVarianceResult(parts, 'depthLimit');
@@ -63,8 +63,9 @@ export function chartBiasVarianceResult(
     } else {
       zeroOne = true;
       out.push({ complexity: x, component: 'error', value: r.loss as number });
+      // Domingos (2000): loss = bias + net variance. Bias is 0 or 1 per row, so its square is itself.
       out.push({ complexity: x, component: 'bias²', value: r.bias as number });
-      out.push({ complexity: x, component: 'variance', value: r.variance as number });
+      out.push({ complexity: x, component: 'variance', value: r.netVariance as number });
     }
   }
   return chartBiasVariance(out, {

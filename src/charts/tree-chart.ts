@@ -40,6 +40,8 @@ export interface TreeChartOptions extends Omit<ChartOptions, 'width' | 'height'>
 /** Box half-height in levels: normal, and with two-line titles. */
 const BOX_HALF_H = 0.31;
 const BOX_HALF_H_WRAPPED = 0.35;
+/** Line height of a two-line title, in pixels. */
+const TITLE_LINE = 13;
 
 function nodeHeadline(tree: FlatTree, n: number, input: TreeChartInput): { title: string; share?: string; mean: number } {
   const k = tree.nOutputs;
@@ -134,7 +136,11 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
   const halfH = sized.wrapped ? BOX_HALF_H_WRAPPED : BOX_HALF_H;
   const level = options.levelHeight ?? (sized.wrapped ? 108 : 92);
   const titleAt = sized.wrapped ? -0.19 : -0.16, rowsAt = sized.wrapped ? 0.02 : 0;
-  nodes.forEach((node, i) => Object.assign(node, { title: sized.titles[i], y0: (node.d as number) - halfH, y1: (node.d as number) + halfH }));
+  // vega puts the first line of a multi-line text at the given y, so a two-line title starts half a line higher.
+  nodes.forEach((node, i) => Object.assign(node, {
+    title: sized.titles[i], titleDy: titleAt - (Array.isArray(sized.titles[i]) ? TITLE_LINE / 2 / level : 0),
+    y0: (node.d as number) - halfH, y1: (node.d as number) + halfH,
+  }));
   const links: Record<string, unknown>[] = [];
   const labels: Record<string, unknown>[] = [];
   for (const e of edgeInfo) {
@@ -165,7 +171,8 @@ export function chartTree(input: TreeChartInput, options: TreeChartOptions = {})
       encoding: { x: X('x0'), x2: { field: 'x1' }, y: Y('y0'), y2: { field: 'y1' }, fill } },
     { data: { values: nodes }, transform: [{ filter: 'datum.collapsed' }], mark: { type: 'rect', cornerRadius: 4, stroke: '#5f6673', strokeWidth: 1.2, strokeDash: [4, 3] },
       encoding: { x: X('x0'), x2: { field: 'x1' }, y: Y('y0'), y2: { field: 'y1' }, fill } },
-    text('title', titleAt, { fontWeight: 'bold', fontSize: TITLE_FONT, lineHeight: 13, color: ROLE.ink }),
+    { ...text('title', 0, { fontWeight: 'bold', fontSize: TITLE_FONT, lineHeight: TITLE_LINE, color: ROLE.ink }),
+      transform: [{ calculate: 'datum.d + datum.titleDy', as: 'ty' }] },
     text('rows', rowsAt, { fontSize: LINE_FONT, color: '#3b4250' }),
     { data: { values: labels }, mark: { type: 'text', align: 'left', dx: 4, baseline: 'middle', fontSize: 10, color: '#3b4250', limit: slot - 16 },
       encoding: { x: X('x'), y: Y('y'), text: { field: 'text' } } },

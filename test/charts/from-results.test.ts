@@ -76,7 +76,9 @@ describe('chartBiasVarianceResult(rows, complexity, options)', () => {
     const spec = chartBiasVarianceResult(zo, 'depthLimit');
     expect(JSON.stringify(spec)).toContain('zero-one loss (share of rows)');
     const rows = allRows(spec).filter((r) => r.complexity === 4 && typeof r.value === 'number');
-    expect(rows.map((r) => r.value)).toEqual(expect.arrayContaining([zo[1].loss, zo[1].variance]));
+    // Domingos (2000): loss = bias + net variance, so the drawn parts add up to the drawn error.
+    expect(rows.map((r) => r.value)).toEqual(expect.arrayContaining([zo[1].loss, zo[1].bias, zo[1].netVariance]));
+    expect((zo[1].bias as number) + (zo[1].netVariance as number)).toBeCloseTo(zo[1].loss as number, 12);
   });
 
   it('refuses a complexity that is not a numeric setting of every row', () => {

@@ -136,6 +136,7 @@ export function gallery(): Record<string, ChartSpec> {
     lc.push({ round: r, set: 'watched', loss: 0.4 * Math.exp(-r / 50) + 0.39 + 0.00012 * r + rng.normal() * 0.003 });
   }
   out['learning-curve'] = charts.chartLearningCurve(lc, { lossName: 'multiclass log loss (nats)', bestRound: 168 });
+  out['learning-curve-late-best'] = charts.chartLearningCurve(lc, { lossName: 'multiclass log loss (nats)', bestRound: 262 });
   const vc: charts.ValidationCurveRow[] = [];
   for (let d = 1; d <= 12; d++) for (let f = 1; f <= 5; f++) vc.push({ value: d, fold: f, score: 0.62 + 0.14 * (1 - Math.exp(-d / 2.2)) - 0.006 * Math.max(0, d - 5) + rng.normal() * 0.012 });
   out['validation-curve'] = charts.chartValidationCurve(vc, { setting: 'depth limit', scoreName: 'accuracy (share correct)', chosen: 6 });

@@ -29,6 +29,7 @@ import { checkHistTask } from './hist-check.js';
 import { breadthFirst, emitTree, type NodeRecord } from './hist-emit.js';
 import { finishChoice, pickChoice, type FinishedHistSplit } from './hist-finish.js';
 import { scanFeature, type HistChoice } from './hist-scan.js';
+import { buildSparse, clearSparse, occupiedBuffers, sparseFits, type OccupiedBins } from './hist-sparse.js';
 import { openWorkspace, type HistWorkspace } from './hist-workspace.js';
 
 const REL_TOL = 1e-12;
@@ -54,6 +55,10 @@ interface Run {
   readonly sampled: boolean;
   readonly all: number[];
   readonly nodes: NodeRecord[];
+  /** A histogram slot kept all-zero between sparse builds (hist-sparse.ts); -1 until first needed. */
+  clean: number;
+  /** Reused occupied-bin lists of the current sparse build. */
+  readonly occ: OccupiedBins;
 }
 
 /**
@@ -78,7 +83,7 @@ function grow(task: GrowTask, ws: HistWorkspace, nPos: number): GrowResult {
   const k = task.settings.featuresPerSplit;
   const run: Run = {
     task, ws, measure, nCh: r.kind === 'class' ? r.nClasses : 2, gainRatio: r.kind === 'class' && r.criterion === 'gainRatio',
-    sampled: k > 0 && 2 * k < ws.nFeat, all: Array.from({ length: ws.nFeat }, (_, f) => f), nodes: [],
+    sampled: k > 0 && 2 * k < ws.nFeat, all: Array.from({ length: ws.nFeat }, (_, f) => f), nodes: [], clean: -1, occ: occupiedBuffers(),
   };
   const rootStats = gather(run, 0, nPos);
   let rootHist = -1;
@@ -181,10 +186,12 @@ function openNode(run: Run, start: number, count: number, depth: number, stats: 
   let split: FinishedHistSplit | null = null;
   if (eligible(run, stats, depth)) {
     const features = sampleFeatures(run.all, task.settings.featuresPerSplit, task.rng);
-    if (run.sampled) { hist = ws.takeSlot(); buildHist(run, start, count, features, hist); }
+    let occ: OccupiedBins | null = null;
+    if (run.sampled && sparseFits(count)) { hist = cleanSlot(run); occ = run.occ; buildSparse(ws, start, count, features, hist, occ); }
+    else if (run.sampled) { hist = ws.takeSlot(); buildHist(run, start, count, features, hist); }
     const tol = REL_TOL * sm.impurity;
     const s = task.settings;
-    const scan = { ws, measure: run.measure, nCh: run.nCh, histPtr: hist, mean: sm.mean, leafRows: s.leafRows, leafWeight: s.leafWeight, tol };
+    const scan = { ws, measure: run.measure, nCh: run.nCh, histPtr: hist, mean: sm.mean, leafRows: s.leafRows, leafWeight: s.leafWeight, tol, occupied: occ };
     const cands: HistChoice[] = [];
     for (const f of features) {
       const c = scanFeature(scan, f);
@@ -195,10 +202,21 @@ function openNode(run: Run, start: number, count: number, depth: number, stats: 
       const done = finishChoice(choice, run.measure, run.nCh, nodeChannels(run, stats, sm.mean), tol);
       if (done.gain > tol && done.gain >= s.minGain) { split = done; recordSplit(run, id, done, hist); }
     }
-    if (run.sampled) { ws.giveSlot(hist); hist = -1; }
+    if (occ) clearSparse(ws, hist, occ);
+    else if (run.sampled) ws.giveSlot(hist);
+    if (run.sampled) hist = -1;
   }
   if (!split && hist >= 0) { ws.giveSlot(hist); hist = -1; }
   return { id, start, count, depth, stats, hist, split };
+}
+
+/** The run's all-zero slot for sparse builds (allocated and cleared once per run). */
+function cleanSlot(run: Run): number {
+  if (run.clean < 0) {
+    run.clean = run.ws.takeSlot();
+    run.ws.engine.arena.f64(run.clean, Math.max(1, run.ws.nFeat) * BINS * run.ws.stride).fill(0);
+  }
+  return run.clean;
 }
 
 /** Write the split's threshold or category set into the node record (children filled in by expand). */
@@ -234,8 +252,10 @@ function expand(run: Run, node: Open): [Open, Open] {
   const depth = node.depth + 1;
   let lStats: Float64Array, rStats: Float64Array, lHist = -1, rHist = -1;
   if (run.sampled) {
-    lStats = gather(run, ls, lc);
-    rStats = gather(run, rs, rc);
+    // each child builds its own histograms from the gathered arrays, so gather one child, open it, then the other
+    const left = openNode(run, ls, lc, depth, gather(run, ls, lc), -1);
+    const right = openNode(run, rs, rc, depth, gather(run, rs, rc), -1);
+    return link(run, node, left, right);
   } else {
     const leftSmall = lc <= rc;
     const [ss, sc] = leftSmall ? [ls, lc] : [rs, rc];
@@ -256,8 +276,11 @@ function expand(run: Run, node: Open): [Open, Open] {
     [lStats, rStats] = leftSmall ? [small, large] : [large, small];
     [lHist, rHist] = leftSmall ? [smallHist, largeHist] : [largeHist, smallHist];
   }
-  const left = openNode(run, ls, lc, depth, lStats, lHist);
-  const right = openNode(run, rs, rc, depth, rStats, rHist);
+  return link(run, node, openNode(run, ls, lc, depth, lStats, lHist), openNode(run, rs, rc, depth, rStats, rHist));
+}
+
+/** Record the children of an expanded node. */
+function link(run: Run, node: Open, left: Open, right: Open): [Open, Open] {
   const rec = run.nodes[node.id].split as NonNullable<NodeRecord['split']>;
   rec.left = left.id;
   rec.right = right.id;

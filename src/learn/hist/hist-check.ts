@@ -3,23 +3,12 @@
  * (src/learn/tree/grow-exact.ts and grow-context.ts), so both engines reject the same bad input.
  */
 import { errors } from '../../errors.js';
+import { checkGrowSettings } from '../check-grow-settings.js';
 import type { GrowTask } from '../grow-task.js';
 
 /** Throw on bad settings, weights or responses; returns the rows with positive weight, ascending. */
 export function checkHistTask(task: GrowTask): Int32Array {
-  const s = task.settings;
-  const nonNeg = (name: string, v: number, int: boolean): void => {
-    if (!(v >= 0) || (int && v !== Infinity && !Number.isInteger(v))) throw errors.badOption(name, v, int ? 'a non-negative integer' : 'a non-negative number');
-  };
-  nonNeg('depthLimit', s.depthLimit, true);
-  nonNeg('leafWeight', s.leafWeight, false);
-  nonNeg('minGain', s.minGain, false);
-  nonNeg('featuresPerSplit', s.featuresPerSplit, true);
-  if (!(s.leafRows >= 1) || !Number.isInteger(s.leafRows)) throw errors.badOption('leafRows', s.leafRows, 'an integer >= 1');
-  if (!(s.leafBudget >= 2) || (s.leafBudget !== Infinity && !Number.isInteger(s.leafBudget))) {
-    throw errors.badOption('leafBudget', s.leafBudget, 'an integer >= 2 or Infinity');
-  }
-  if (s.categorical !== 'multiway' && s.categorical !== 'subset') throw errors.badOption('categorical', s.categorical, "'multiway' or 'subset'");
+  checkGrowSettings(task.settings);
   const { frame, weights, response } = task;
   const n = frame.nRows;
   if (weights.length !== n) throw errors.badOption('weights', `length ${weights.length}`, `length ${n} (one per row)`);

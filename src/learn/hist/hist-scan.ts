@@ -11,9 +11,11 @@
  *   (Fisher 1958; Breiman, Friedman, Olshen & Stone 1984, §4.2.2 and §8.8). Ties in order: lower bin.
  */
 import { BINS, MISSING } from '../../kernels/layout.js';
+import { scanValueListTs } from '../../kernels/ts-scan.js';
 import { viewsOf } from '../../kernels/views.js';
 import { NUMERIC, SUBSET } from '../flat-tree.js';
 import { ENTROPY, GINI, channelWeight, weightedImpurity, type ImpurityCode } from '../tree/impurity.js';
+import type { OccupiedBins } from './hist-sparse.js';
 import type { HistWorkspace } from './hist-workspace.js';
 
 export interface HistChoice {
@@ -42,6 +44,8 @@ export interface ScanNode {
   readonly leafRows: number;
   readonly leafWeight: number;
   readonly tol: number;
+  /** For a node built over occupied bins only (hist-sparse.ts): where to find each feature's non-empty bins. */
+  readonly occupied?: OccupiedBins | null;
 }
 
 /** Channels of bin b of a block starting at double index h (see the file comment). */
@@ -65,7 +69,9 @@ function missingOf(s: ScanNode, f64: Float64Array, h: number): { stats: Float64A
 function scanNumericValue(s: ScanNode, f: number, nBins: number): HistChoice | null {
   const { arena, kernels } = s.ws.engine;
   const block = s.histPtr + f * BINS * s.ws.stride * 8;
-  kernels.scanValue(block, nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
+  const occ = s.occupied, k = occ ? occ.feats.indexOf(f) : -1;
+  if (occ) scanValueListTs(arena.buffer, block, occ.bins, k * occ.stride, occ.lens[k], nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
+  else kernels.scanValue(block, nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
   const o = viewsOf(arena.buffer).f64, q = s.ws.scanPtr >> 3;
   if (o[q + 1] < 0) return null;
   const m = missingOf(s, o, block >> 3);
@@ -137,7 +143,8 @@ export function scanFeature(s: ScanNode, f: number): HistChoice | null {
   if (feat.kind === 'numeric' && s.ws.nClasses === 0) return scanNumericValue(s, f, feat.nBins);
   const f64 = viewsOf(s.ws.engine.arena.buffer).f64;
   const h = blockStart(s, f);
-  const seen = seenBins(s, f64, h, feat.nBins);
+  const occ = s.occupied, k = occ ? occ.feats.indexOf(f) : -1;
+  const seen = occ ? Array.from(occ.bins.subarray(k * occ.stride, k * occ.stride + occ.lens[k])) : seenBins(s, f64, h, feat.nBins);
   if (feat.kind === 'numeric') {
     const r = scanOrdered(s, f64, h, seen);
     return r ? choiceFrom(s, f, f64, h, NUMERIC, r, seen) : null;
