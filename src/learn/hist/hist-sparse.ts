@@ -44,12 +44,13 @@ export interface OccupiedBins {
   stride: number;
   /** Per position i of the node: the bin of row i for the feature being built (scratch). */
   codes: Int32Array;
-  mark: Uint8Array;
+  /** 256-bit set of occupied bins (scratch, all zero between builds). */
+  mark: Int32Array;
 }
 
 /** Empty reusable buffers. */
 export function occupiedBuffers(): OccupiedBins {
-  return { feats: [], bins: new Int32Array(0), lens: new Int32Array(0), stride: 0, codes: new Int32Array(0), mark: new Uint8Array(BINS) };
+  return { feats: [], bins: new Int32Array(0), lens: new Int32Array(0), stride: 0, codes: new Int32Array(0), mark: new Int32Array(BINS / 32) };
 }
 
 /**
@@ -72,18 +73,23 @@ export function buildSparse(ws: HistWorkspace, start: number, count: number, fea
     const f = feats[k];
     const col = ws.codesPtr + f * ws.nRows, h = (hist >> 3) + f * BINS * stride;
     const base = k * count;
-    let len = 0;
+    // occupied bins as a 256-bit set, then listed in ascending order by lowest set bit
     for (let i = 0; i < count; i++) {
       const b = u8[col + i32[rows + i]];
       codes[i] = b;
-      if (b === MISSING || mark[b] === 1) continue;
-      mark[b] = 1;
-      // insertion into the ascending list (a node here has at most a few dozen rows)
-      let j = base + len++;
-      while (j > base && bins[j - 1] > b) { bins[j] = bins[j - 1]; j--; }
-      bins[j] = b;
+      mark[b >>> 5] |= 1 << (b & 31);
     }
-    for (let j = base; j < base + len; j++) mark[bins[j]] = 0;
+    mark[MISSING >>> 5] &= ~(1 << (MISSING & 31));
+    let len = 0;
+    for (let w = 0; w < 8; w++) {
+      let x = mark[w];
+      while (x !== 0) {
+        const low = x & -x;
+        bins[base + len++] = (w << 5) + 31 - Math.clz32(low);
+        x ^= low;
+      }
+      mark[w] = 0;
+    }
     lens[k] = len;
     if (ws.nClasses === 0) {
       const gs = ws.gxPtr >> 3;
