@@ -16,5 +16,8 @@ export interface KernelSet {
   histSubtract(parentPtr: number, childPtr: number, outPtr: number, featsPtr: number, nFeats: number, stride: number): void;
   partitionRows(colPtr: number, rowsPtr: number, count: number, lutPtr: number, scratchPtr: number): number;
   scanValue(blockPtr: number, nBins: number, mean: number, leafRows: number, leafWeight: number, tol: number, outPtr: number): void;
+  histValueSparse(codesPtr: number, nRows: number, rowsPtr: number, count: number, gwPtr: number, gsPtr: number,
+    featsPtr: number, nFeats: number, histPtr: number, binsPtr: number, lensPtr: number, markPtr: number): void;
+  scanValueList(blockPtr: number, binsPtr: number, nList: number, nBins: number, mean: number, leafRows: number, leafWeight: number, tol: number, outPtr: number): void;
   predictLeaves(tree: TreePtrs, dataPtr: number, nRows: number, outPtr: number): void;
 }

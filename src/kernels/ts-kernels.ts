@@ -5,7 +5,8 @@ import { gatherClassTs, gatherValueTs } from './ts-gather.js';
 import { histClassTs, histSubtractTs, histValueTs } from './ts-hist.js';
 import { partitionRowsTs } from './ts-partition.js';
 import { predictLeavesTs } from './ts-predict.js';
-import { scanValueTs } from './ts-scan.js';
+import { scanValueListTs, scanValueTs } from './ts-scan.js';
+import { histValueSparseTs } from './ts-sparse.js';
 
 /**
  * Kernels written in TypeScript, reading and writing `arena`'s memory.
@@ -23,6 +24,8 @@ export function tsKernels(arena: Arena): KernelSet {
     histSubtract: (...a) => histSubtractTs(m.buffer, ...a),
     partitionRows: (...a) => partitionRowsTs(m.buffer, ...a),
     scanValue: (...a) => scanValueTs(m.buffer, ...a),
+    histValueSparse: (...a) => histValueSparseTs(m.buffer, ...a),
+    scanValueList: (...a) => scanValueListTs(m.buffer, ...a),
     predictLeaves: (...a) => predictLeavesTs(m.buffer, ...a),
   };
 }

@@ -39,21 +39,18 @@ export function scanValueTs(buf: ArrayBufferLike, blockPtr: number, nBins: numbe
 }
 
 /**
- * `scanValueTs` over a list of bins instead of 0..nBins-1: `bins[from..from+nList)` must hold, ascending, every
- * non-empty bin below `nBins` (other bins of the block are zero). Empty bins only ever add +0 to the dense
- * scan's sums and are skipped by its threshold loop, so the result is bit-for-bit the dense scan's.
- * Used for small nodes, whose histograms touch few bins (src/learn/hist/hist-sparse.ts).
- * @example
- * scanValueListTs(arena.buffer, block, Int32Array.of(3, 9, 40), 0, 3, 64, mean, 1, 0, tol, outPtr);
+ * `scanValueTs` over a list of bins instead of 0..nBins-1 (twin of `scanValueList`): the i32 list at
+ * `binsPtr` holds `nList` bins ascending, every non-empty bin below `nBins` (other bins of the block are
+ * zero). Empty bins only ever add +0 to the dense scan's sums and are skipped by its threshold loop, so the
+ * result is bit-for-bit the dense scan's. Used for small nodes (src/learn/hist/hist-sparse.ts).
  */
-export function scanValueListTs(buf: ArrayBufferLike, blockPtr: number, bins: Int32Array, from: number, nList: number, nBins: number,
+export function scanValueListTs(buf: ArrayBufferLike, blockPtr: number, binsPtr: number, nList: number, nBins: number,
   mean: number, leafRows: number, leafWeight: number, tol: number, outPtr: number): void {
-  const { f64 } = viewsOf(buf);
-  const h = blockPtr >> 3, o = outPtr >> 3;
+  const { f64, i32 } = viewsOf(buf);
+  const h = blockPtr >> 3, o = outPtr >> 3, from = binsPtr >> 2, end = from + nList;
   let tn = 0, tw = 0, ts = 0, nonEmpty = 0;
-  const end = from + nList;
   for (let j = from; j < end; j++) {
-    const b = bins[j];
+    const b = i32[j];
     const n = f64[h + b * 3];
     if (n > 0) nonEmpty++;
     tn += n; tw += f64[h + b * 3 + 1]; ts += f64[h + b * 3 + 2];
@@ -66,7 +63,7 @@ export function scanValueListTs(buf: ArrayBufferLike, blockPtr: number, bins: In
   let ln = 0, lw = 0, ls = 0;
   let best = -Infinity, bestBin = -1, bn = 0, bw = 0, bs = 0;
   for (let j = from; j < end; j++) {
-    const b = bins[j];
+    const b = i32[j];
     if (b >= nBins - 1) break;
     const n = f64[h + b * 3];
     if (n === 0) continue;

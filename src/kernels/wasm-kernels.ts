@@ -53,6 +53,8 @@ export function wasmKernels(arena: Arena, module: WasmModule | null = wasmModule
     histSubtract: ex.histSubtract,
     partitionRows: ex.partitionRows,
     scanValue: ex.scanValue,
+    histValueSparse: ex.histValueSparse,
+    scanValueList: ex.scanValueList,
     predictLeaves: (t, dataPtr, nRows, outPtr) => {
       ex.predictLeaves(t.kind, t.feature, t.threshold, t.left, t.right, t.missing, t.offset, t.width, t.branches, t.catBits, dataPtr, nRows, outPtr);
     },

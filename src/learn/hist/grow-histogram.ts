@@ -29,7 +29,7 @@ import { checkHistTask } from './hist-check.js';
 import { breadthFirst, emitTree, type NodeRecord } from './hist-emit.js';
 import { finishChoice, pickChoice, type FinishedHistSplit } from './hist-finish.js';
 import { scanFeature, type HistChoice } from './hist-scan.js';
-import { buildSparse, clearSparse, occupiedBuffers, sparseFits, type OccupiedBins } from './hist-sparse.js';
+import { buildSparse, clearSparse, occupiedRegion, sparseFits, type OccupiedBins } from './hist-sparse.js';
 import { openWorkspace, type HistWorkspace } from './hist-workspace.js';
 
 const REL_TOL = 1e-12;
@@ -57,8 +57,8 @@ interface Run {
   readonly nodes: NodeRecord[];
   /** A histogram slot kept all-zero between sparse builds (hist-sparse.ts); -1 until first needed. */
   clean: number;
-  /** Reused occupied-bin lists of the current sparse build. */
-  readonly occ: OccupiedBins;
+  /** Occupied-bin lists of the current sparse build (allocated with the clean slot). */
+  occ: OccupiedBins | null;
 }
 
 /**
@@ -83,7 +83,7 @@ function grow(task: GrowTask, ws: HistWorkspace, nPos: number): GrowResult {
   const k = task.settings.featuresPerSplit;
   const run: Run = {
     task, ws, measure, nCh: r.kind === 'class' ? r.nClasses : 2, gainRatio: r.kind === 'class' && r.criterion === 'gainRatio',
-    sampled: k > 0 && 2 * k < ws.nFeat, all: Array.from({ length: ws.nFeat }, (_, f) => f), nodes: [], clean: -1, occ: occupiedBuffers(),
+    sampled: k > 0 && 2 * k < ws.nFeat, all: Array.from({ length: ws.nFeat }, (_, f) => f), nodes: [], clean: -1, occ: null,
   };
   const rootStats = gather(run, 0, nPos);
   let rootHist = -1;
@@ -187,15 +187,23 @@ function openNode(run: Run, start: number, count: number, depth: number, stats: 
   if (eligible(run, stats, depth)) {
     const features = sampleFeatures(run.all, task.settings.featuresPerSplit, task.rng);
     let occ: OccupiedBins | null = null;
-    if (run.sampled && sparseFits(count)) { hist = cleanSlot(run); occ = run.occ; buildSparse(ws, start, count, features, hist, occ); }
+    if (run.sampled && sparseFits(count)) {
+      hist = cleanSlot(run);
+      occ = run.occ as OccupiedBins;
+      ws.engine.arena.i32(ws.featsPtr, features.length).set(features);
+      buildSparse(ws, start, count, features, hist, occ);
+    }
     else if (run.sampled) { hist = ws.takeSlot(); buildHist(run, start, count, features, hist); }
     const tol = REL_TOL * sm.impurity;
     const s = task.settings;
     const scan = { ws, measure: run.measure, nCh: run.nCh, histPtr: hist, mean: sm.mean, leafRows: s.leafRows, leafWeight: s.leafWeight, tol, occupied: occ };
     const cands: HistChoice[] = [];
+    // pickChoice keeps the first candidate and then each one beating the kept one by more than tol; without
+    // gain ratio only such candidates can matter, so the others are not built (same choice)
+    let floor = tol;
     for (const f of features) {
-      const c = scanFeature(scan, f);
-      if (c !== null && c.score > tol) cands.push(c);
+      const c = scanFeature(scan, f, floor);
+      if (c !== null && c.score > tol) { cands.push(c); if (!run.gainRatio) floor = c.score + tol; }
     }
     const choice = pickChoice(cands, run.measure, run.nCh, run.gainRatio, sm.weight, tol);
     if (choice) {
@@ -215,6 +223,7 @@ function cleanSlot(run: Run): number {
   if (run.clean < 0) {
     run.clean = run.ws.takeSlot();
     run.ws.engine.arena.f64(run.clean, Math.max(1, run.ws.nFeat) * BINS * run.ws.stride).fill(0);
+    run.occ = occupiedRegion(run.ws);
   }
   return run.clean;
 }
@@ -247,7 +256,10 @@ function expand(run: Run, node: Open): [Open, Open] {
   if (split.kind === NUMERIC) for (let b = 0; b < BINS; b++) lut[b] = b <= split.bin ? 1 : 0;
   else lut.set(split.leftBins as Uint8Array);
   lut[MISSING] = split.missingSlot === 0 ? 1 : 0;
-  const nl = kernels.partitionRows(ws.codesPtr + split.feature * ws.nRows, ws.rowsPtr + node.start * 4, node.count, ws.lutPtr, ws.scratchPtr);
+  const builder = histBuilder(kernels);
+  const nl = builder.partition
+    ? builder.partition(ws.codesPtr + split.feature * ws.nRows, ws.rowsPtr + node.start * 4, node.count, ws.lutPtr, ws.scratchPtr)
+    : kernels.partitionRows(ws.codesPtr + split.feature * ws.nRows, ws.rowsPtr + node.start * 4, node.count, ws.lutPtr, ws.scratchPtr);
   const ls = node.start, lc = nl, rs = node.start + nl, rc = node.count - nl;
   const depth = node.depth + 1;
   let lStats: Float64Array, rStats: Float64Array, lHist = -1, rHist = -1;

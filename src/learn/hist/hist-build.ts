@@ -26,6 +26,11 @@ export interface HistJob {
 
 export interface HistBuilder {
   build(job: HistJob): void;
+  /**
+   * Stable partition of a node's rows (the `partitionRows` kernel's contract: left rows first, both sides in
+   * their original order); returns the left count. Absent: the caller runs the kernel itself.
+   */
+  partition?(colPtr: number, rowsPtr: number, count: number, lutPtr: number, scratchPtr: number): number;
 }
 
 /**

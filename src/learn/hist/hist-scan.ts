@@ -11,11 +11,10 @@
  *   (Fisher 1958; Breiman, Friedman, Olshen & Stone 1984, §4.2.2 and §8.8). Ties in order: lower bin.
  */
 import { BINS, MISSING } from '../../kernels/layout.js';
-import { scanValueListTs } from '../../kernels/ts-scan.js';
 import { viewsOf } from '../../kernels/views.js';
 import { NUMERIC, SUBSET } from '../flat-tree.js';
 import { ENTROPY, GINI, channelWeight, weightedImpurity, type ImpurityCode } from '../tree/impurity.js';
-import type { OccupiedBins } from './hist-sparse.js';
+import { occupiedLength, occupiedList, type OccupiedBins } from './hist-sparse.js';
 import type { HistWorkspace } from './hist-workspace.js';
 
 export interface HistChoice {
@@ -66,14 +65,14 @@ function missingOf(s: ScanNode, f64: Float64Array, h: number): { stats: Float64A
 }
 
 /** Numeric feature with a value response: the kernel scan. */
-function scanNumericValue(s: ScanNode, f: number, nBins: number): HistChoice | null {
+function scanNumericValue(s: ScanNode, f: number, nBins: number, floor: number): HistChoice | null {
   const { arena, kernels } = s.ws.engine;
   const block = s.histPtr + f * BINS * s.ws.stride * 8;
   const occ = s.occupied, k = occ ? occ.feats.indexOf(f) : -1;
-  if (occ) scanValueListTs(arena.buffer, block, occ.bins, k * occ.stride, occ.lens[k], nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
+  if (occ) kernels.scanValueList(block, occ.binsPtr + k * occ.count * 4, occupiedLength(s.ws, occ, k), nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
   else kernels.scanValue(block, nBins, s.mean, s.leafRows, s.leafWeight, s.tol, s.ws.scanPtr);
   const o = viewsOf(arena.buffer).f64, q = s.ws.scanPtr >> 3;
-  if (o[q + 1] < 0) return null;
+  if (o[q + 1] < 0 || !(o[q] > floor)) return null;
   const m = missingOf(s, o, block >> 3);
   return {
     feature: f, kind: NUMERIC, bin: o[q + 1], leftBins: null,
@@ -137,17 +136,20 @@ function seenBins(s: ScanNode, f64: Float64Array, h: number, nBins: number): num
   return seen;
 }
 
-/** Best split of feature `f` at the node, or null. */
-export function scanFeature(s: ScanNode, f: number): HistChoice | null {
+/**
+ * Best split of feature `f` at the node, or null — also null when its score is not above `floor` (the
+ * caller passes the score a candidate must beat, so losing candidates are not built).
+ */
+export function scanFeature(s: ScanNode, f: number, floor = -Infinity): HistChoice | null {
   const feat = s.ws.binned.features[f];
-  if (feat.kind === 'numeric' && s.ws.nClasses === 0) return scanNumericValue(s, f, feat.nBins);
+  if (feat.kind === 'numeric' && s.ws.nClasses === 0) return scanNumericValue(s, f, feat.nBins, floor);
   const f64 = viewsOf(s.ws.engine.arena.buffer).f64;
   const h = blockStart(s, f);
   const occ = s.occupied, k = occ ? occ.feats.indexOf(f) : -1;
-  const seen = occ ? Array.from(occ.bins.subarray(k * occ.stride, k * occ.stride + occ.lens[k])) : seenBins(s, f64, h, feat.nBins);
+  const seen = occ ? occupiedList(s.ws, occ, k) : seenBins(s, f64, h, feat.nBins);
   if (feat.kind === 'numeric') {
     const r = scanOrdered(s, f64, h, seen);
-    return r ? choiceFrom(s, f, f64, h, NUMERIC, r, seen) : null;
+    return r && r.score > floor ? choiceFrom(s, f, f64, h, NUMERIC, r, seen) : null;
   }
   // subset: order bins by a score (see the file comment)
   const nCh = s.nCh, m = s.measure;
@@ -162,5 +164,5 @@ export function scanFeature(s: ScanNode, f: number): HistChoice | null {
   for (const b of seen) { binChannels(s, f64, h, b, ch, 0); key[b] = ch[channel] / channelWeight(m, ch, 0, nCh); }
   const order = seen.slice().sort((a, b) => key[a] - key[b] || a - b);
   const r = scanOrdered(s, f64, h, order);
-  return r ? choiceFrom(s, f, f64, h, SUBSET, r, order) : null;
+  return r && r.score > floor ? choiceFrom(s, f, f64, h, SUBSET, r, order) : null;
 }

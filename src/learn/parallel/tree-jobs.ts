@@ -5,7 +5,8 @@
  * Jobs are claimed from a shared atomic counter by the calling thread and `workers - 1` worker threads;
  * each result depends only on (input, t) — seeds come from `derive(seed, t, ...)` — so the output is
  * identical whatever the number of workers or the scheduling. The caller blocks (Atomics.wait) until all
- * jobs are done; results travel back on MessagePorts read with `receiveMessageOnPort`. Workers are kept
+ * jobs are done; results travel back on MessagePorts read with `receiveMessageOnPort` between the calling
+ * thread's own jobs (their whole-buffer typed arrays are moved, not copied). Workers are kept
  * for reuse and unref'd (they never keep the process alive). A job failing in the calling thread throws
  * its own error; one failing in a worker is reported as a worker failure naming the job. With one worker, or when the job module or
  * the worker script is not built into dist/, everything runs in the calling thread.
@@ -80,6 +81,7 @@ export function runTreeJobs<I, R>(count: number, spec: TreeJobSpec<I, R>, worker
     try { out[t] = spec.run(input, t); } catch (e) { own ??= e; }
     done[t] = 1;
     Atomics.add(control, 1, 1);
+    drain(); // take the helpers' results as they come, not all at the end
   }
   for (;;) {
     const finished = Atomics.load(control, 1);
