@@ -16,8 +16,13 @@ export function featureRangesOf(frame: Frame): TrainingRanges {
   const out: Record<string, [number, number]> = {};
   for (const c of frame.columns) {
     if (c.kind === 'categorical') continue;
+    const values = c.values;
     let lo = Infinity, hi = -Infinity;
-    for (const v of c.values) { if (v < lo) lo = v; if (v > hi) hi = v; }
+    for (let i = 0; i < values.length; i++) {
+      const v = values[i]; // NaN fails both comparisons: missing values are skipped
+      if (v < lo) lo = v;
+      if (v > hi) hi = v;
+    }
     if (lo <= hi) out[c.name] = [lo, hi];
   }
   return out;
