@@ -12,12 +12,20 @@ export function checkHistTask(task: GrowTask): Int32Array {
   const { frame, weights, response } = task;
   const n = frame.nRows;
   if (weights.length !== n) throw errors.badOption('weights', `length ${weights.length}`, `length ${n} (one per row)`);
+  if (response.kind === 'value' && response.values.length !== n) {
+    throw errors.badOption('response.values', `length ${response.values.length}`, `length ${n}`);
+  }
   const all = new Int32Array(n);
+  const y = response.kind === 'value' ? response.values : null;
   let nPos = 0;
   for (let i = 0; i < n; i++) {
     const wi = weights[i];
     if (!(wi >= 0) || wi === Infinity) throw errors.badValue('weights', i, wi, 'a finite non-negative weight');
-    if (wi > 0) all[nPos++] = i;
+    if (wi > 0) {
+      // numbers are checked in the same pass (row order), so the first bad row is the one named
+      if (y !== null && y[i] - y[i] !== 0) throw errors.badValue('target', i, y[i], 'a finite number');
+      all[nPos++] = i;
+    }
   }
   if (nPos === 0) throw errors.emptyData('grow a tree (no row has a positive weight)');
   const base = all.subarray(0, nPos);
@@ -29,13 +37,6 @@ export function checkHistTask(task: GrowTask): Int32Array {
     for (let i = 0; i < nPos; i++) {
       const r = base[i], c = codes[r];
       if (!(c >= 0 && c < k)) throw errors.badValue('target', r, c, `a class code in 0..${k - 1}`);
-    }
-  } else {
-    if (response.values.length !== n) throw errors.badOption('response.values', `length ${response.values.length}`, `length ${n}`);
-    const y = response.values;
-    for (let i = 0; i < nPos; i++) {
-      const v = y[base[i]];
-      if (v - v !== 0) throw errors.badValue('target', base[i], v, 'a finite number');
     }
   }
   return base;

@@ -44,8 +44,11 @@ export function logisticLoss(): RatioLoss {
       for (let i = 0; i < y.length; i++) { const p = y[i] - r[i]; num[i] = r[i]; den[i] = p * (1 - p); }
     },
     fusedTerms(y, F, w, r, den) {
-      // one exponential per row: e = e^−|F| gives both log(1 + e^F) and the logistic function
-      let s = 0, sw = 0;
+      // One exponential per row: e = e^−|F| gives both log(1 + e^F) = max(F, 0) + log(1 + e) and the
+      // logistic function. For rows of weight 1 (the usual case, and every row kept by subsampling) the
+      // log(1 + e) terms are summed as the log of a product of up to 64 factors in (1, 2] — one log per 64
+      // rows instead of one log1p per row; the loss changes by ~1e-14 relative, residuals not at all.
+      let s = 0, sw = 0, prod = 1, m = 0;
       for (let i = 0; i < y.length; i++) {
         const f = F[i], yi = y[i], e = Math.exp(f > 0 ? -f : f);
         const ri = yi - (f >= 0 ? 1 / (1 + e) : e / (1 + e));
@@ -54,9 +57,16 @@ export function logisticLoss(): RatioLoss {
         den[i] = p * (1 - p);
         const wi = w[i];
         if (!(wi > 0)) continue;
-        s += wi * ((f > 0 ? f + Math.log1p(e) : Math.log1p(e)) - yi * f);
+        if (wi === 1) {
+          prod *= 1 + e;
+          if (++m === 64) { s += Math.log(prod); prod = 1; m = 0; }
+        } else {
+          s += wi * Math.log1p(e);
+        }
+        s += wi * ((f > 0 ? f : 0) - yi * f);
         sw += wi;
       }
+      s += Math.log(prod);
       return sw > 0 ? s / sw : 0;
     },
   };
