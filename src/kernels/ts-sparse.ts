@@ -23,18 +23,27 @@ export function histValueSparseTs(buf: ArrayBufferLike, codesPtr: number, nRows:
       f64[p + 1] = f64[p + 1] + f64[gw + i];
       f64[p + 2] = f64[p + 2] + f64[gs + i];
     }
-    const out = (binsPtr >> 2) + k * count;
-    let len = 0;
-    for (let w = 0; w < BINS / 32; w++) {
-      let x = u32[mark + w];
-      if (w === MISSING >>> 5) x &= ~(1 << (MISSING & 31));
-      while (x !== 0) {
-        const low = x & -x;
-        i32[out + len++] = (w << 5) + 31 - Math.clz32(low);
-        x ^= low;
-      }
-      u32[mark + w] = 0;
-    }
-    i32[(lensPtr >> 2) + k] = len;
+    i32[(lensPtr >> 2) + k] = drainOccupiedBins(u32, i32, mark, (binsPtr >> 2) + k * count);
   }
+}
+
+/**
+ * Write the bins marked in the 256-bit set at u32 index `mark` to the i32 list at index `out`, ascending,
+ * leaving out the missing bin, and clear the set; returns the list's length.
+ * @example
+ * const len = drainOccupiedBins(u32, i32, mark, out); // i32[out .. out + len) = occupied bins
+ */
+export function drainOccupiedBins(u32: Uint32Array, i32: Int32Array, mark: number, out: number): number {
+  let len = 0;
+  for (let w = 0; w < BINS / 32; w++) {
+    let x = u32[mark + w];
+    if (w === MISSING >>> 5) x &= ~(1 << (MISSING & 31));
+    while (x !== 0) {
+      const low = x & -x;
+      i32[out + len++] = (w << 5) + 31 - Math.clz32(low);
+      x ^= low;
+    }
+    u32[mark + w] = 0;
+  }
+  return len;
 }

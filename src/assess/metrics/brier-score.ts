@@ -1,6 +1,4 @@
-import {
-  checkCodes, checkLength, checkNotEmpty, checkProbabilities, checkWeights, probaColumns, type Weights,
-} from './check.js';
+import { checkClassProbabilities, type Weights } from './check.js';
 
 /**
  * Brier score: mean squared difference between predicted probabilities and the 0/1 outcome.
@@ -20,12 +18,7 @@ import {
  */
 export function brierScore(actual: ArrayLike<number>, proba: ArrayLike<number>, weights?: Weights): number {
   const n = actual.length;
-  checkNotEmpty(n, 'brierScore');
-  const k = probaColumns(n, proba);
-  const classes = checkCodes('actual', actual);
-  if (classes > Math.max(k, 2)) checkLength('probabilities', n * classes, proba);
-  checkProbabilities(proba);
-  const w = checkWeights(weights, n);
+  const { k, w } = checkClassProbabilities('brierScore', actual, proba, weights);
   let sum = 0, total = 0;
   for (let i = 0; i < n; i++) {
     let s = 0;

@@ -66,3 +66,20 @@ export function probaColumns(n: number, proba: ArrayLike<number>): number {
   if (n > 0 && proba.length % n === 0 && proba.length / n >= 2) return proba.length / n;
   throw errors.lengthMismatch('probabilities', n, proba.length);
 }
+
+/**
+ * The shared checks of a metric on class codes and probabilities: non-empty, codes valid, probability
+ * array of n or n × K values in [0, 1] (n × classes when the codes need more columns), weights valid.
+ * Returns the columns per row and the weights.
+ * @example
+ * const { k, w } = checkClassProbabilities('logLoss', [1, 0], [0.8, 0.4]); // k = 1, w = [1, 1]
+ */
+export function checkClassProbabilities(metric: string, actual: ArrayLike<number>, proba: ArrayLike<number>, weights?: Weights): { k: number; w: Float64Array } {
+  const n = actual.length;
+  checkNotEmpty(n, metric);
+  const k = probaColumns(n, proba);
+  const classes = checkCodes('actual', actual);
+  if (classes > Math.max(k, 2)) checkLength('probabilities', n * classes, proba);
+  checkProbabilities(proba);
+  return { k, w: checkWeights(weights, n) };
+}

@@ -1,6 +1,4 @@
-import {
-  checkCodes, checkLength, checkNotEmpty, checkProbabilities, checkWeights, probaColumns, type Weights,
-} from './check.js';
+import { checkClassProbabilities, type Weights } from './check.js';
 
 /** Probabilities are clipped to [CLIP, 1 - CLIP] before the logarithm, so a confident miss costs at most -ln(1e-15) ≈ 34.5. */
 export const LOG_LOSS_CLIP = 1e-15;
@@ -19,12 +17,7 @@ export const LOG_LOSS_CLIP = 1e-15;
  */
 export function logLoss(actual: ArrayLike<number>, proba: ArrayLike<number>, weights?: Weights): number {
   const n = actual.length;
-  checkNotEmpty(n, 'logLoss');
-  const k = probaColumns(n, proba);
-  const classes = checkCodes('actual', actual);
-  if (classes > Math.max(k, 2)) checkLength('probabilities', n * classes, proba);
-  checkProbabilities(proba);
-  const w = checkWeights(weights, n);
+  const { k, w } = checkClassProbabilities('logLoss', actual, proba, weights);
   let sum = 0, total = 0;
   for (let i = 0; i < n; i++) {
     const y = actual[i];

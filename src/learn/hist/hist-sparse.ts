@@ -9,6 +9,7 @@
  * (test/learn/hist/grow-histogram-sampled.test.ts). Class responses use the same lists, built here.
  */
 import { BINS, MISSING } from '../../kernels/layout.js';
+import { drainOccupiedBins } from '../../kernels/ts-sparse.js';
 import { viewsOf } from '../../kernels/views.js';
 import type { HistWorkspace } from './hist-workspace.js';
 
@@ -91,19 +92,7 @@ export function buildSparse(ws: HistWorkspace, start: number, count: number, fea
       const q = p + 1 + i32[gc + i];
       f64[q] = f64[q] + f64[gw + i];
     }
-    const out = (occ.binsPtr >> 2) + k * count;
-    let len = 0;
-    for (let w = 0; w < BINS / 32; w++) {
-      let x = u32[mark + w];
-      if (w === MISSING >>> 5) x &= ~(1 << (MISSING & 31));
-      while (x !== 0) {
-        const low = x & -x;
-        i32[out + len++] = (w << 5) + 31 - Math.clz32(low);
-        x ^= low;
-      }
-      u32[mark + w] = 0;
-    }
-    i32[(occ.lensPtr >> 2) + k] = len;
+    i32[(occ.lensPtr >> 2) + k] = drainOccupiedBins(u32, i32, mark, (occ.binsPtr >> 2) + k * count);
   }
 }
 
